@@ -1,0 +1,6 @@
+namespace Helipol.Cli;
+
+public static class Program
+{
+    public static int Main(string[] args) => CliApp.Run(args);
+}
