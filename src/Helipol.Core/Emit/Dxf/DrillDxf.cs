@@ -19,7 +19,13 @@ public static class DrillDxf
     {
         var doc = new DxfDocument(Layers);
         var ci = CultureInfo.InvariantCulture;
-        foreach (var v in DrillTemplates.Views(g))
+        var views = DrillTemplates.Views(g);
+        var top = views.Max(v => v.Centre.Y + v.OuterRadiusMm) + 9;
+        doc.Text("TEXT", new Point2(0, top + 4), 2.5, DxfText.Clean($"{g.Input.DesignName} DRILL GUIDE"));
+        doc.Text("TEXT", new Point2(0, top), 2.0, string.Create(ci,
+            $"HOLES DIA {DrillTemplates.HoleDiameterMm(g):0.00} MM. DRILL FROM EACH TOP-FACE HOLE ALONG ITS LINE, TILTED FROM THE AXIS BY THE ANGLE GIVEN (DEG FROM THE AXIS)."));
+        doc.Text("TEXT", new Point2(0, top - 3.5), 2.0, "BOTTOM FACES ARE DRAWN MIRRORED, AS SEEN FROM BELOW, TO CHECK WHERE EACH HOLE COMES OUT.");
+        foreach (var v in views)
         {
             var c = v.Centre;
             doc.Circle("GUIDE", c, v.OuterRadiusMm);
@@ -33,16 +39,16 @@ public static class DrillDxf
                 var label = h.Centre.Length > 0 ? (1 / h.Centre.Length) * h.Centre : new Point2(1, 0);
                 doc.Text("TEXT", c + (v.OuterRadiusMm + 2.5) * label - new Point2(0.7, 0.9), 1.8, h.ElementNumber.ToString(ci));
             }
-            var below = c + new Point2(-v.OuterRadiusMm - 5, -v.OuterRadiusMm - 8.5);
-            var face = v.Face == RingFace.Top ? "TOP FACE" : "BOTTOM FACE, MIRRORED (SEEN FROM BELOW)";
-            doc.Text("TEXT", below, 2.5, DxfText.Clean($"RING {v.RingNumber} {face}"));
-            if (v.Holes.Count > 0)
+            var below = c + new Point2(-v.OuterRadiusMm - 4, -v.OuterRadiusMm - 6.5);
+            doc.Text("TEXT", below, 2.2, DxfText.Clean($"RING {v.RingNumber} {(v.Face == RingFace.Top ? "TOP" : "BOTTOM")}"));
+            var next = below - new Point2(0, 3);
+            if (v.Face == RingFace.Bottom)
             {
-                var h = v.Holes[0];
-                doc.Text("TEXT", below - new Point2(0, 3.5), 2.0,
-                    string.Create(ci, $"HOLE DIA {h.DiameterMm:0.00} MM, DRILL {h.AngleFromNormalDeg:0.0} DEG FROM THE AXIS ALONG THE LINE"));
+                doc.Text("TEXT", next, 1.8, "MIRRORED");
+                next -= new Point2(0, 3);
             }
-            doc.Text("TEXT", below - new Point2(0, 7), 2.0, DxfText.Clean(g.Input.DesignName));
+            if (v.Holes.Count > 0)
+                doc.Text("TEXT", next, 1.8, string.Create(ci, $"TILT {v.Holes.Max(h => h.AngleFromNormalDeg):0.0} DEG"));
         }
         return doc.ToBytes();
     }

@@ -25,7 +25,10 @@ public static class RingsDxf
                 DxfText.Clean(string.Create(CultureInfo.InvariantCulture, $"BOARD {i.BoardWidthMm:0.#} X {i.BoardHeightMm:0.#} X {i.BoardThicknessMm:0.#} MM, KERF {i.KerfMm:0.###} MM")));
         }
         foreach (var v in RingTemplates.NestedTopFaces(g)) DrawView(doc, v, "CUT", g);
-        foreach (var v in RingTemplates.BottomFaceGuides(g)) DrawView(doc, v, "GUIDE", g);
+        var guides = RingTemplates.BottomFaceGuides(g);
+        doc.Text("TEXT", new Point2(RingTemplates.BoardMarginMm, -RingTemplates.BoardGapMm + 4), 2.5,
+            "BOTTOM FACES, MIRRORED: GUIDES FOR MARKING THE UNDERSIDE BY HAND, DO NOT CUT");
+        foreach (var v in guides) DrawView(doc, v, "GUIDE", g);
         return doc.ToBytes();
     }
 
@@ -43,9 +46,9 @@ public static class RingsDxf
             doc.Line("MARK", c + m.OnContour, c + m.Inner);
             doc.Text("TEXT", c + m.LabelAt - new Point2(0.7, 0.9), 1.8, m.ElementNumber.ToString(CultureInfo.InvariantCulture));
         }
-        var below = c + new Point2(-v.HalfSizeMm, -v.HalfSizeMm - 3.5);
-        var face = v.Face == RingFace.Top ? "TOP FACE" : "BOTTOM FACE, MIRRORED";
-        doc.Text("TEXT", below, 2.5, DxfText.Clean($"RING {v.RingNumber} {face}"));
-        doc.Text("TEXT", below - new Point2(0, 3.5), 2.0, DxfText.Clean(g.Input.DesignName));
+        var below = c + new Point2(-v.HalfSizeMm + 1, -v.HalfSizeMm - 2.5);
+        doc.Text("TEXT", below, 2.2, DxfText.Clean($"RING {v.RingNumber} {(v.Face == RingFace.Top ? "TOP" : "BOTTOM")}"));
+        if (v.Face == RingFace.Bottom) doc.Text("TEXT", below - new Point2(0, 3), 1.8, "MIRRORED");
+        doc.Text("TEXT", below - new Point2(0, v.Face == RingFace.Bottom ? 6 : 3), 1.8, DxfText.Clean(g.Input.DesignName));
     }
 }
