@@ -117,6 +117,24 @@ public class SheetTests
             Assert.Contains(texts, t => t.Contains("Ring templates") && t.Contains($"Ring {ring}, top face") && t.Contains($"Ring {ring}, bottom face"));
     }
 
+    [Fact]
+    public void PacketCarriesThePlotsItIsGiven()
+    {
+        // Two plots handed in as PNG bytes must come out as two image XObjects (PdfPig reads
+        // them back from the page resources, PDF 32000-1 §8.9).
+        byte[] Plot(SKColor colour)
+        {
+            using var bmp = new SKBitmap(300, 200);
+            bmp.Erase(colour);
+            using var img = SKImage.FromBitmap(bmp);
+            return img.Encode(SKEncodedImageFormat.Png, 100).ToArray();
+        }
+        var input = BuildInputs.Typical with { PlotPngs = [Plot(SKColors.SteelBlue), Plot(SKColors.Orange)] };
+        var bytes = Helipol.Emit.FabricationSet.Render(input).Single(f => f.FileName == "packet.pdf").Bytes;
+        using var pdf = PdfDocument.Open(bytes);
+        Assert.Equal(2, pdf.GetPages().Sum(p => p.GetImages().Count()));
+    }
+
     /// <summary>PDF 32000-1:2008 §8.3.2.3: user space units are 1/72 in; A4 (ISO 216) is
     /// 210 × 297 mm = 595.28 × 841.89 pt, US Letter 8.5 × 11 in = 612 × 792 pt.</summary>
     private static void AssertPaper(PaperSize paper, double w, double h)

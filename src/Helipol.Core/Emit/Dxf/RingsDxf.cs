@@ -22,7 +22,8 @@ public static class RingsDxf
         {
             doc.Rectangle("BOARD", origin, i.BoardWidthMm, i.BoardHeightMm);
             doc.Text("TEXT", origin + new Point2(2, i.BoardHeightMm + 2), 3,
-                DxfText.Clean(string.Create(CultureInfo.InvariantCulture, $"BOARD {i.BoardWidthMm:0.#} X {i.BoardHeightMm:0.#} X {i.BoardThicknessMm:0.#} MM, KERF {i.KerfMm:0.###} MM")));
+                DxfText.Clean(string.Create(CultureInfo.InvariantCulture,
+                    $"BOARD {i.BoardWidthMm:0.#} X {i.BoardHeightMm:0.#} X {i.BoardThicknessMm:0.#} MM, KERF {i.KerfMm:0.###} MM, RINGS {g.RingThicknessMm:0.##} MM THICK, TICKS WHERE EACH ELEMENT MEETS THE FACE")));
         }
         foreach (var v in RingTemplates.NestedTopFaces(g)) DrawView(doc, v, "CUT", g);
         var guides = RingTemplates.BottomFaceGuides(g);
