@@ -6,9 +6,6 @@ using Helipol.Geometry;
 
 namespace Helipol.Emit;
 
-/// <summary>One output file: its name in the design's folder and its bytes.</summary>
-public sealed record FabricationFile(string FileName, byte[] Bytes);
-
 /// <summary>
 /// The fabrication set for one design: every file rendered in memory, in a fixed order, from the
 /// build input alone. Rendering is pure and deterministic: the same input gives the same bytes.
@@ -35,28 +32,5 @@ public static class FabricationSet
             new("bend-sheet.pdf", BendSheetPdf.Write(g)),
             new("packet.pdf", PacketPdf.Write(g)),
         ];
-    }
-}
-
-/// <summary>
-/// Writes a rendered fabrication set into a folder. Everything is rendered before the first byte
-/// is written, and each file goes through <see cref="AtomicFile"/>, so a failure (bad input, a
-/// renderer error) leaves the folder's earlier files as they were.
-/// </summary>
-public static class FabricationWriter
-{
-    public static IReadOnlyList<string> Write(PolarizerBuildInput input, string folder) =>
-        Write(FabricationSet.Render(input), folder);
-
-    public static IReadOnlyList<string> Write(IReadOnlyList<FabricationFile> files, string folder)
-    {
-        var written = new List<string>();
-        foreach (var f in files)
-        {
-            var path = Path.Combine(folder, f.FileName);
-            AtomicFile.WriteAllBytes(path, f.Bytes);
-            written.Add(path);
-        }
-        return written;
     }
 }
