@@ -11,13 +11,16 @@ public sealed record DrillFaceView(int RingNumber, RingFace Face, Point2 Centre,
 /// Drilling guides for the push-through build, where each wire runs inside the foam wall instead of
 /// on its surface. Holes sit on a circle one hole diameter inside the outer surface, leaving half
 /// a hole of foam outside the wire (a design choice of this tool, to keep the radius close to the
-/// solved one while the skin holds). Each ring is drilled straight from the top hole to the bottom
+/// solved one while the skin holds); a wall thinner than two holes is drilled down its middle. Each ring is drilled straight from the top hole to the bottom
 /// hole; the angle is measured from the face normal (the whip axis).
 /// </summary>
 public static class DrillTemplates
 {
     public static double HoleDiameterMm(PolarizerGeometry g) => g.Input.WireDiameterMm + g.Input.DrillClearanceMm;
-    public static double HoleCircleRadiusMm(PolarizerGeometry g) => g.FormerOuterRadiusMm - HoleDiameterMm(g);
+    /// <summary>One hole diameter inside the outer surface, or mid-wall when the wall is thinner
+    /// than two hole diameters.</summary>
+    public static double HoleCircleRadiusMm(PolarizerGeometry g) =>
+        Math.Max(g.FormerOuterRadiusMm - HoleDiameterMm(g), (g.FormerOuterRadiusMm + g.FormerBoreRadiusMm) / 2);
 
     public static IReadOnlyList<DrillFaceView> Views(PolarizerGeometry g)
     {
