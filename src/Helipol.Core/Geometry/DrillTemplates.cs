@@ -11,8 +11,9 @@ public sealed record DrillFaceView(int RingNumber, RingFace Face, Point2 Centre,
 /// Drilling guides for the push-through build, where each wire runs inside the foam wall instead of
 /// on its surface. Holes sit on a circle one hole diameter inside the outer surface, leaving half
 /// a hole of foam outside the wire (a design choice of this tool, to keep the radius close to the
-/// solved one while the skin holds); a wall thinner than two holes is drilled down its middle. Each ring is drilled straight from the top hole to the bottom
-/// hole; the angle is measured from the face normal (the whip axis).
+/// solved one while the skin holds); a wall thinner than two holes is drilled down its middle.
+/// Each ring is drilled straight from the top hole to the bottom hole; the angle is measured from
+/// the face normal (the whip axis).
 /// </summary>
 public static class DrillTemplates
 {
