@@ -53,7 +53,7 @@ public partial class MeshFileTests
         var sleeve = FormerSleeve.From(new PolarizerGeometry(input));
         var expected = AnalyticFormerVolume(input, sleeve);
         var measured = double.Parse(r["Volume"], CultureInfo.InvariantCulture);
-        // The limit is 0.5 %; the grooves are only about 1 % of the solid, so hold the
+        // The required limit is 0.5 %; the grooves are only about 1 % of the solid, so hold the
         // mesh to 0.1 % as well, which a groove 15 % too wide or too shallow would break. Facets
         // sit within 0.005 mm of the surface; an inscribed polygon loses about 4/3 · sagitta/radius
         // of its area (series of n·sin(2π/n)/2π, any calculus text), under 0.1 % at these radii.
