@@ -25,7 +25,7 @@ public class PolarizerGeometryTests
             Assert.Equal(input.ElementLengthMm, length, 4);
             Assert.Equal(input.ElementRiseMm, e.PointAt(1).Z - e.PointAt(0).Z, 9);
             Assert.Equal(input.CentreHeightMm, (e.PointAt(1).Z + e.PointAt(0).Z) / 2, 9);
-            // Radius: formers's outer radius plus half the wire (the wire lies on the former).
+            // Radius: former's outer radius plus half the wire (the wire lies on the former).
             var start = e.PointAt(0);
             Assert.Equal(input.FormerOuterDiameterMm / 2 + input.WireDiameterMm / 2, Math.Sqrt(start.X * start.X + start.Y * start.Y), 9);
             // Element k starts at azimuth 360°·k/N.
