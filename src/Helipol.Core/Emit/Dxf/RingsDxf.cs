@@ -1,0 +1,55 @@
+using System.Globalization;
+using Helipol.Geometry;
+
+namespace Helipol.Emit.Dxf;
+
+/// <summary>
+/// rings.dxf: foam rings nested on the board for laser, CNC or knife. Layer CUT holds the
+/// kerf-compensated contours (outer with the orientation notch, bore), MARK the element marks to
+/// score or draw, TEXT the labels, BOARD the stock outline, GUIDE the mirrored bottom-face views
+/// drawn under the board for marking each ring's underside by hand (never cut).
+/// </summary>
+public static class RingsDxf
+{
+    public static readonly IReadOnlyList<DxfLayer> Layers =
+        [new("BOARD", 8), new("CUT", 1), new("MARK", 5), new("TEXT", 3), new("GUIDE", 4)];
+
+    public static byte[] Write(PolarizerGeometry g)
+    {
+        var doc = new DxfDocument(Layers);
+        var i = g.Input;
+        foreach (var origin in RingTemplates.BoardOrigins(g))
+        {
+            doc.Rectangle("BOARD", origin, i.BoardWidthMm, i.BoardHeightMm);
+            doc.Text("TEXT", origin + new Point2(2, i.BoardHeightMm + 2), 3,
+                DxfText.Clean(string.Create(CultureInfo.InvariantCulture,
+                    $"BOARD {i.BoardWidthMm:0.#} X {i.BoardHeightMm:0.#} X {i.BoardThicknessMm:0.#} MM, KERF {i.KerfMm:0.###} MM, RINGS {g.RingThicknessMm:0.##} MM THICK, TICKS WHERE EACH ELEMENT MEETS THE FACE")));
+        }
+        foreach (var v in RingTemplates.NestedTopFaces(g)) DrawView(doc, v, "CUT", g);
+        var guides = RingTemplates.BottomFaceGuides(g);
+        doc.Text("TEXT", new Point2(RingTemplates.BoardMarginMm, -RingTemplates.BoardGapMm + 4), 2.5,
+            "BOTTOM FACES, MIRRORED: GUIDES FOR MARKING THE UNDERSIDE BY HAND, DO NOT CUT");
+        foreach (var v in guides) DrawView(doc, v, "GUIDE", g);
+        return doc.ToBytes();
+    }
+
+    internal static void DrawView(DxfDocument doc, RingFaceView v, string contourLayer, PolarizerGeometry g)
+    {
+        var c = v.Centre;
+        var n = v.Notch;
+        // Outer contour: the long arc from the notch's right edge round to its left edge
+        // (counter-clockwise, included angle 2π − 2·half), then the two sides of the V.
+        var arc = 2 * Math.PI - 2 * n.HalfAngleRad;
+        doc.ClosedPolyline(contourLayer, [c + n.Right, c + n.Left, c + n.Tip], [Math.Tan(arc / 4), 0, 0]);
+        doc.Circle(contourLayer, c, v.CutBoreRadiusMm);
+        foreach (var m in v.Marks)
+        {
+            doc.Line("MARK", c + m.OnContour, c + m.Inner);
+            doc.Text("TEXT", c + m.LabelAt - new Point2(0.7, 0.9), 1.8, m.ElementNumber.ToString(CultureInfo.InvariantCulture));
+        }
+        var below = c + new Point2(-v.HalfSizeMm + 1, -v.HalfSizeMm - 2.5);
+        doc.Text("TEXT", below, 2.2, DxfText.Clean($"RING {v.RingNumber} {(v.Face == RingFace.Top ? "TOP" : "BOTTOM")}"));
+        if (v.Face == RingFace.Bottom) doc.Text("TEXT", below - new Point2(0, 3), 1.8, "MIRRORED");
+        doc.Text("TEXT", below - new Point2(0, v.Face == RingFace.Bottom ? 6 : 3), 1.8, DxfText.Clean(g.Input.DesignName));
+    }
+}

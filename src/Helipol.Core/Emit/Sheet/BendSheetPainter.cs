@@ -1,0 +1,193 @@
+using System.Globalization;
+using SkiaSharp;
+using Helipol.Geometry;
+
+namespace Helipol.Emit.Sheet;
+
+/// <summary>
+/// Draws the 1:1 bend sheet on a canvas scaled to millimetres (y down). The same drawing becomes
+/// the PNG and the vector PDF. Contents: calibration bars, element cut template with tolerance band,
+/// unrolled wrap template, arc bend template, winding drawing, build table and cautions.
+/// </summary>
+public static class BendSheetPainter
+{
+    public const double MarginMm = 12;
+    public const double BarHeightMm = 3;
+    public const double BarTopMm = 27;
+    public const double MetricBarMm = 50;
+    public const double InchBarMm = 2 * Paper.MmPerInch;
+
+    public static void Paint(SKCanvas canvas, PolarizerGeometry g)
+    {
+        var (pageW, _) = Paper.SizeMm(g.Input.Paper);
+        using var pen = new SheetPen(canvas);
+        var i = g.Input;
+        var m = MarginMm;
+        var ci = CultureInfo.InvariantCulture;
+        pen.Text($"Bend sheet: {i.DesignName}", m, 17, 5);
+        pen.Text(string.Create(ci, $"{BuildTable.SenseLabel(i.Sense)} · {i.ElementCount} elements · {BuildTable.FrequencyLabel(i.FrequencyHz)} · print at 100 % (actual size), then check both bars"), m, 23, 3, grey: true);
+        CalibrationBars(pen, m);
+
+        // 1. Element cut template.
+        var y = 42.0;
+        pen.Text("1  Element: lay the wire on the line, cut within the grey band", m, y, 3.2);
+        var L = i.ElementLengthMm;
+        var tol = i.LengthToleranceMm;
+        pen.FillRect(m + L - tol, y + 2, 2 * tol, 8, new SKColor(200, 200, 200));
+        pen.Line(m, y + 6, m + L, y + 6, 0.5);
+        pen.Line(m, y + 2, m, y + 10, 0.3);
+        pen.Line(m + L, y + 2, m + L, y + 10, 0.3);
+        pen.Text(string.Create(ci, $"L = {L:0.00} mm, tolerance ± {tol:0.00} mm"), m, y + 14, 2.6, grey: true);
+
+        // 2. Wrap template.
+        y += 20;
+        pen.Text("2  Wrap template: cut out, wrap round the former (bottom edge down), mark the lines", m, y, 3.2);
+        y = WrapTemplateDrawing(pen, WrapTemplate.From(g), m, y + 4, pageW - 2 * m);
+
+        // 3. Arc bend template and 4. winding drawing, side by side.
+        var boxW = (pageW - 2 * m) / 2;
+        pen.Text("3  Bend: the wire must lie on this arc", m, y, 3.2);
+        pen.Text("4  Which way the elements run", m + boxW, y, 3.2);
+        ArcTemplate(pen, g, m, y + 4, boxW - 4, 44);
+        WindingDrawing(pen, g, m + boxW, y + 4);
+        y += 60;
+
+        // 5. Build table.
+        pen.Text("5  Build table", m, y, 3.2);
+        y += 5.5;
+        foreach (var (label, value) in BuildTable.Rows(g))
+        {
+            pen.Text(label, m, y, 2.8);
+            pen.Text(value, m + 34, y, 2.8);
+            y += 4.4;
+        }
+
+        // 6. Cautions.
+        y += 2;
+        pen.Text("6  Cautions", m, y, 3.2);
+        y += 5;
+        foreach (var line in Cautions.Lines)
+        {
+            pen.Text(line, m, y, 2.5);
+            y += 3.8;
+        }
+    }
+
+    /// <summary>Solid bars exactly 50 mm and 2 in long; a printer scaling the page shows here first.</summary>
+    internal static void CalibrationBars(SheetPen pen, double x)
+    {
+        pen.FillRect(x, BarTopMm, MetricBarMm, BarHeightMm, SKColors.Black);
+        pen.FillRect(x + 60, BarTopMm, InchBarMm, BarHeightMm, SKColors.Black);
+        pen.Text("50 mm", x, BarTopMm + BarHeightMm + 3.5, 2.6);
+        pen.Text("2 in (50.8 mm)", x + 60, BarTopMm + BarHeightMm + 3.5, 2.6);
+    }
+
+    private static double WrapTemplateDrawing(SheetPen pen, WrapTemplate wrap, double x, double top, double maxWidth)
+    {
+        var pieceW = maxWidth - wrap.GlueTabMm;
+        var pieces = (int)Math.Ceiling(wrap.WidthMm / pieceW - 1e-9);
+        var y = top;
+        for (var p = 0; p < pieces; p++)
+        {
+            var from = p * pieceW;
+            var w = Math.Min(pieceW, wrap.WidthMm - from);
+            pen.Rect(x, y, w, wrap.HeightMm, 0.3);
+            if (p == pieces - 1)
+            {
+                pen.Rect(x + w, y, wrap.GlueTabMm, wrap.HeightMm, 0.2, [1f, 1f]);
+                pen.Text("glue", x + w + 1, y + wrap.HeightMm / 2 + 1, 2.2, grey: true);
+            }
+            if (pieces > 1) pen.Text($"part {p + 1} of {pieces}", x + 1, y + wrap.HeightMm - 1, 2.2, grey: true);
+            pen.Canvas.Save();
+            pen.Canvas.ClipRect(new SKRect((float)x, (float)y, (float)(x + w), (float)(y + wrap.HeightMm)));
+            foreach (var line in wrap.Lines)
+                pen.Line(x + line.From.X - from, y + wrap.HeightMm - line.From.Y, x + line.To.X - from, y + wrap.HeightMm - line.To.Y, 0.3);
+            pen.Canvas.Restore();
+            foreach (var line in wrap.Lines.GroupBy(l => l.ElementNumber).Select(grp => grp.First()))
+            {
+                var lx = line.From.X - from;
+                if (lx >= 0 && lx < w)
+                    pen.Text(line.ElementNumber.ToString(CultureInfo.InvariantCulture), x + lx + 0.8, y + wrap.HeightMm - line.From.Y - 0.8, 2.4);
+            }
+            y += wrap.HeightMm + 4;
+        }
+        pen.Text(string.Create(CultureInfo.InvariantCulture, $"{wrap.WidthMm:0.00} mm = one turn of the former; numbers at each element's lower end"), x, y, 2.4, grey: true);
+        return y + 8;
+    }
+
+    private static void ArcTemplate(SheetPen pen, PolarizerGeometry g, double x, double top, double w, double h)
+    {
+        var rho = g.BendRadiusMm;
+        var sweep = g.Input.ElementLengthMm / rho;
+        // The arc stands symmetric about a vertical line, its apex up; the centre lies below.
+        var cx = x + w / 2;
+        var apexY = top + 4;
+        var cy = apexY + rho;
+        using var path = new SKPath();
+        var steps = 200;
+        for (var k = 0; k <= steps; k++)
+        {
+            var a = -sweep / 2 + sweep * k / steps;
+            var px = (float)(cx + rho * Math.Sin(a));
+            var py = (float)(cy - rho * Math.Cos(a));
+            if (k == 0) path.MoveTo(px, py); else path.LineTo(px, py);
+        }
+        pen.Canvas.Save();
+        pen.Canvas.ClipRect(new SKRect((float)x, (float)top, (float)(x + w), (float)(top + h)));
+        pen.Path(path, 0.5);
+        foreach (var a in new[] { -sweep / 2, sweep / 2 })
+        {
+            var (sx, sy) = (Math.Sin(a), -Math.Cos(a));
+            pen.Line(cx + (rho - 2) * sx, cy + (rho - 2) * sy, cx + (rho + 2) * sx, cy + (rho + 2) * sy, 0.3);
+        }
+        if (cy < top + h)
+        {
+            pen.Line(cx - 1.5, cy, cx + 1.5, cy, 0.2);
+            pen.Line(cx, cy - 1.5, cx, cy + 1.5, 0.2);
+            pen.Line(cx, cy, cx, apexY, 0.15, dash: [1f, 1f]);
+        }
+        pen.Canvas.Restore();
+        pen.Text(string.Create(CultureInfo.InvariantCulture, $"radius {rho:0.00} mm, tick to tick {g.Input.ElementLengthMm:0.00} mm along the arc"), x, top + h + 3, 2.4, grey: true);
+    }
+
+    private static void WindingDrawing(SheetPen pen, PolarizerGeometry g, double x, double top)
+    {
+        // Side view of the former: seen from outside, azimuth increases to the right, so a
+        // right-hand element climbs to the right on the near side and to the left on the far side.
+        var w = 22.0;
+        var h = 34.0;
+        var x0 = x + 4;
+        var y0 = top + 4;
+        pen.Rect(x0, y0, w, h, 0.3);
+        var slope = Math.Clamp(g.PitchAngleRad, 0.35, 1.2);
+        var dir = g.WindingSign;
+        for (var k = 0; k < 3; k++)
+        {
+            var yb = y0 + h - 4 - k * 10;
+            var dx = 14.0;
+            var dy = Math.Tan(slope) * dx * 0.6;
+            var (xa, xb) = dir > 0 ? (x0 + 4, x0 + 4 + dx) : (x0 + w - 4, x0 + w - 4 - dx);
+            pen.Line(xa, yb, xb, yb - dy, 0.6);
+            pen.Arrow(xb, yb - dy, Math.Atan2(-dy, xb - xa));
+        }
+        // Top view: the turn an element makes as it climbs, drawn as seen from above.
+        var cx = x0 + w + 20;
+        var cy = y0 + 12;
+        pen.Circle(cx, cy, 8, 0.3);
+        using var arc = new SKPath();
+        // Seen from above with azimuth counter-clockwise; page y is down, so counter-clockwise on
+        // paper is decreasing page angle.
+        var sweep = dir > 0 ? -250f : 250f;
+        arc.AddArc(new SKRect((float)cx - 5, (float)cy - 5, (float)cx + 5, (float)cy + 5), 90, sweep);
+        pen.Path(arc, 0.4);
+        var endA = (90 + sweep) * Math.PI / 180;
+        var tangent = endA + (dir > 0 ? -Math.PI / 2 : Math.PI / 2);
+        pen.Arrow(cx + 5 * Math.Cos(endA), cy + 5 * Math.Sin(endA), tangent);
+        var words = dir > 0
+            ? new[] { "Right-hand winding:", "from outside, each element", "climbs to the right; from", "above, it turns counter-", "clockwise as it climbs." }
+            : new[] { "Left-hand winding:", "from outside, each element", "climbs to the left; from", "above, it turns clockwise", "as it climbs." };
+        var ty = cy + 13;
+        foreach (var line in words) { pen.Text(line, cx - 10, ty, 2.4); ty += 3.4; }
+        pen.Text(BuildTable.SenseLabel(g.Input.Sense), x0, y0 + h + 4, 3);
+    }
+}

@@ -1,0 +1,100 @@
+using SkiaSharp;
+using Helipol.Geometry;
+
+namespace Helipol.Emit.Sheet;
+
+/// <summary>
+/// packet.pdf: the build packet. Summary pages (the summary lines, then any plots), the bend sheet,
+/// then the ring templates at 1:1 (top face beside the mirrored bottom face) for cutting by hand.
+/// </summary>
+public static class PacketPdf
+{
+    private const double LineMm = 5.0;
+
+    public static byte[] Write(PolarizerGeometry g)
+    {
+        var pages = new List<Action<SKCanvas>>();
+        pages.AddRange(SummaryPages(g));
+        pages.Add(c => BendSheetPainter.Paint(c, g));
+        pages.AddRange(RingPages(g));
+        return PdfPages.Write(g.Input.Paper, $"Build packet: {g.Input.DesignName}", pages);
+    }
+
+    private static IEnumerable<Action<SKCanvas>> SummaryPages(PolarizerGeometry g)
+    {
+        var (pageW, pageH) = Paper.SizeMm(g.Input.Paper);
+        var m = BendSheetPainter.MarginMm;
+        var width = pageW - 2 * m;
+        var bottom = pageH - m;
+        // Lay out first (text rows, then plots), then cut into pages.
+        var items = new List<(double Height, Action<SheetPen, double> Draw)>();
+        items.Add((10, (p, y) => p.Text($"Build packet: {g.Input.DesignName}", m, y + 6, 5)));
+        var rows = g.Input.SummaryLines.Count > 0
+            ? g.Input.SummaryLines.Select(s => (s.Key, s.Value)).ToList()
+            : BuildTable.Rows(g).Select(r => (r.Label, r.Value)).ToList();
+        foreach (var (key, value) in rows)
+            items.Add((LineMm, (p, y) => { p.Text(key, m, y + 3.5, 3); p.Text(value, m + 50, y + 3.5, 3); }));
+        foreach (var png in g.Input.PlotPngs)
+        {
+            using var probe = SKImage.FromEncodedData(png);
+            if (probe is null) continue;
+            var scale = Math.Min(width / probe.Width, 120.0 / probe.Height);
+            var h = probe.Height * scale;
+            var w = probe.Width * scale;
+            items.Add((h + 6, (p, y) =>
+            {
+                using var image = SKImage.FromEncodedData(png);
+                p.Canvas.DrawImage(image, new SKRect((float)m, (float)(y + 3), (float)(m + w), (float)(y + 3 + h)), new SKSamplingOptions(SKFilterMode.Linear));
+            }));
+        }
+        var pages = new List<List<(double Y, Action<SheetPen, double> Draw)>>();
+        var current = new List<(double, Action<SheetPen, double>)>();
+        var cursor = m;
+        foreach (var (height, draw) in items)
+        {
+            if (cursor + height > bottom && current.Count > 0)
+            {
+                pages.Add(current);
+                current = [];
+                cursor = m;
+            }
+            current.Add((cursor, draw));
+            cursor += height;
+        }
+        pages.Add(current);
+        return pages.Select(page => (Action<SKCanvas>)(canvas =>
+        {
+            using var pen = new SheetPen(canvas);
+            foreach (var (y, draw) in page) draw(pen, y);
+        }));
+    }
+
+    private static IEnumerable<Action<SKCanvas>> RingPages(PolarizerGeometry g)
+    {
+        var (pageW, pageH) = Paper.SizeMm(g.Input.Paper);
+        var m = BendSheetPainter.MarginMm;
+        var r = g.FormerOuterRadiusMm;
+        var rowHeight = 2 * r + 22;
+        var top = 40.0;
+        var perPage = Math.Max(1, (int)Math.Floor((pageH - m - top) / rowHeight));
+        var rings = Enumerable.Range(1, g.Input.RingCount).ToList();
+        foreach (var chunk in rings.Chunk(perPage))
+        {
+            yield return canvas =>
+            {
+                using var pen = new SheetPen(canvas);
+                pen.Text($"Ring templates at 1:1: {g.Input.DesignName}", m, 17, 5);
+                BendSheetPainter.CalibrationBars(pen, m);
+                var y = top + r + 6;
+                foreach (var ring in chunk)
+                {
+                    var topView = RingTemplates.View(g, ring, RingFace.Top, new Point2(0, 0), r, g.FormerBoreRadiusMm);
+                    var bottomView = RingTemplates.View(g, ring, RingFace.Bottom, new Point2(0, 0), r, g.FormerBoreRadiusMm);
+                    RingTemplatePainter.Paint(pen, topView, m + r + 6, y, g.Input.DesignName);
+                    RingTemplatePainter.Paint(pen, bottomView, pageW / 2 + r + 6, y, g.Input.DesignName);
+                    y += rowHeight;
+                }
+            };
+        }
+    }
+}

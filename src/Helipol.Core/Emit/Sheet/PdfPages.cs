@@ -1,0 +1,41 @@
+using SkiaSharp;
+using Helipol.Geometry;
+
+namespace Helipol.Emit.Sheet;
+
+/// <summary>
+/// Vector PDF through SkiaSharp's PDF backend. Pages are sized in points (1/72 in); each page's
+/// canvas is scaled so drawing is in millimetres. The document's metadata is fixed (no creation or
+/// modification date) so the same drawing gives the same bytes.
+/// </summary>
+internal static class PdfPages
+{
+    public static byte[] Write(PaperSize paper, string title, IEnumerable<Action<SKCanvas>> pages)
+    {
+        var (wMm, hMm) = Paper.SizeMm(paper);
+        using var stream = new MemoryStream();
+        var metadata = new SKDocumentPdfMetadata
+        {
+            Title = title,
+            Creator = "helipol",
+            Producer = "helipol",
+            // Skia rounds the page size to whole raster pixels; at 7200 dpi that is 0.01 pt, which keeps
+            // A4 at 595.28 × 841.89 pt. Nothing on these pages is rasterised.
+            RasterDpi = 7200,
+            Creation = null,
+            Modified = null,
+        };
+        using (var doc = SKDocument.CreatePdf(stream, metadata))
+        {
+            foreach (var draw in pages)
+            {
+                var canvas = doc.BeginPage((float)(wMm * Paper.PointsPerMm), (float)(hMm * Paper.PointsPerMm));
+                canvas.Scale((float)Paper.PointsPerMm);
+                draw(canvas);
+                doc.EndPage();
+            }
+            doc.Close();
+        }
+        return stream.ToArray();
+    }
+}

@@ -1,0 +1,63 @@
+namespace Helipol.Geometry;
+
+/// <summary>Circular polarization sense per IEEE Std 145 (right-hand = clockwise for an observer
+/// looking in the direction of propagation).</summary>
+public enum CircularSense { Rhcp, Lhcp }
+
+/// <summary>Which way an element winds round the former: right = azimuth increases as the element rises
+/// (a right-handed helix), left = azimuth decreases.</summary>
+public enum HelixWinding { Right, Left }
+
+/// <summary>Paper for the printable sheets.</summary>
+public enum PaperSize { A4, Letter }
+
+/// <summary>One line of the build packet's summary page.</summary>
+public sealed record SummaryLine(string Key, string Value);
+
+/// <summary>
+/// Everything the fabrication set is made from: the solved element and the build settings, all in
+/// millimetres. This is the neutral hand-over from the design to the geometry; nothing here knows
+/// about the design file or the solver.
+/// </summary>
+public sealed record PolarizerBuildInput
+{
+    public required string DesignName { get; init; }
+    public required CircularSense Sense { get; init; }
+    public required HelixWinding Winding { get; init; }
+    public required int ElementCount { get; init; }
+    /// <summary>Total wire length of one element along the helix, mm.</summary>
+    public required double ElementLengthMm { get; init; }
+    /// <summary>Height one element climbs from its lower to its upper end, mm.</summary>
+    public required double ElementRiseMm { get; init; }
+    /// <summary>Height of the element's middle above the former's bottom face, mm.</summary>
+    public required double CentreHeightMm { get; init; }
+    public required double WireDiameterMm { get; init; }
+    public required double FormerOuterDiameterMm { get; init; }
+    public required double FormerBoreDiameterMm { get; init; }
+    public required double FormerHeightMm { get; init; }
+    /// <summary>Outside diameter of the whip's cover the former slides over, mm.</summary>
+    public required double CoverDiameterMm { get; init; }
+    public string WrapMaterial { get; init; } = "none";
+    public double WrapThicknessMm { get; init; }
+    public int WrapLayers { get; init; }
+    /// <summary>Width of material the cutter removes, mm.</summary>
+    public double KerfMm { get; init; } = 0.2;
+    /// <summary>Number of foam rings stacked to make the former.</summary>
+    public int RingCount { get; init; } = 1;
+    public double BoardWidthMm { get; init; } = 200;
+    public double BoardHeightMm { get; init; } = 150;
+    public double BoardThicknessMm { get; init; } = 10;
+    /// <summary>Clearance added to printed fits (bore over the cover, groove over the wire), mm.</summary>
+    public double PrintClearanceMm { get; init; } = 0.2;
+    /// <summary>Clearance added to the wire diameter for drilled holes, mm.</summary>
+    public double DrillClearanceMm { get; init; } = 0.2;
+    public PaperSize Paper { get; init; } = PaperSize.A4;
+    public int Dpi { get; init; } = 300;
+    public double LengthToleranceMm { get; init; } = 0.5;
+    public double RiseToleranceMm { get; init; } = 0.5;
+    /// <summary>Design (centre) frequency, used on labels only.</summary>
+    public double FrequencyHz { get; init; }
+    public IReadOnlyList<SummaryLine> SummaryLines { get; init; } = [];
+    /// <summary>Optional plots (PNG bytes) placed on the packet's summary pages.</summary>
+    public IReadOnlyList<byte[]> PlotPngs { get; init; } = [];
+}
