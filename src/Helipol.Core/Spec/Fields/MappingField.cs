@@ -86,11 +86,12 @@ public sealed class MappingField : FieldType
 
     private string Hint(string key, string path)
     {
+        // A key that exists, spelled right, in another block is more likely misplaced than misspelled.
+        var elsewhere = AllPaths?.Invoke().Where(p => p.Contains('.') && p.Split('.')[^1] == key && p != Join(path, key))
+            .OrderBy(p => p, StringComparer.Ordinal).FirstOrDefault();
+        if (elsewhere is not null) return $" ('{key}' belongs under {elsewhere[..elsewhere.LastIndexOf('.')]})";
         var local = DidYouMean.Closest(key, Fields.Select(f => f.Name));
-        if (local is not null) return $" (did you mean '{local}'?)";
-        if (AllPaths is null) return "";
-        var elsewhere = AllPaths().Where(p => p.Split('.')[^1] == key && p != Join(path, key)).OrderBy(p => p, StringComparer.Ordinal).FirstOrDefault();
-        return elsewhere is null ? "" : $" ('{key}' belongs under {elsewhere[..elsewhere.LastIndexOf('.')]})";
+        return local is null ? "" : $" (did you mean '{local}'?)";
     }
 
     private static string YamlScalarText(string key) => key.Length <= 40 ? key : key[..37] + "...";
