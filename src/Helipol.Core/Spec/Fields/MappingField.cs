@@ -41,11 +41,11 @@ public sealed class MappingField : FieldType
         var given = new HashSet<string>(StringComparer.Ordinal);
         foreach (var (key, value) in mapping.Entries)
         {
-            var keyPath = Join(path, key.Value);
+            var keyPath = Join(path, YamlScalar.KeyText(key.Value));
             var field = Fields.FirstOrDefault(f => f.Name == key.Value);
             if (field is null)
             {
-                Fail(context, key, keyPath, $"unknown key '{YamlScalarText(key.Value)}'", $"{KeyList}{Hint(key.Value, path)}");
+                Fail(context, key, keyPath, $"unknown key '{YamlScalar.KeyText(key.Value)}'", $"{KeyList}{Hint(key.Value, path)}");
                 continue;
             }
             given.Add(field.Name);
@@ -93,8 +93,6 @@ public sealed class MappingField : FieldType
         var local = DidYouMean.Closest(key, Fields.Select(f => f.Name));
         return local is null ? "" : $" (did you mean '{local}'?)";
     }
-
-    private static string YamlScalarText(string key) => key.Length <= 40 ? key : key[..37] + "...";
 
     private static string Join(string path, string key) => path.Length == 0 ? key : $"{path}.{key}";
 
