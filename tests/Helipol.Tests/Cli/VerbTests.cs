@@ -104,3 +104,23 @@ public class VerbTests
         finally { Directory.Delete(folder, recursive: true); }
     }
 }
+
+public class BuildFaultTests
+{
+    [Fact]
+    public void UnwritableOutputIsARuntimeFailureWithOneLine()
+    {
+        var folder = TestPaths.NewTempFolder();
+        try
+        {
+            var blocker = Path.Combine(folder, "not-a-folder");
+            File.WriteAllText(blocker, "a file where the output folder should be");
+            var run = CliRun.Of("build", Path.Combine(TestPaths.Designs, "ridge-video-rx.yaml"), "-o", blocker);
+            Assert.Equal(1, run.ExitCode);
+            Assert.StartsWith("helipol: ", run.Error);
+            Assert.Single(run.Error.TrimEnd('\n').Split('\n'));
+            Assert.Equal("a file where the output folder should be", File.ReadAllText(blocker));
+        }
+        finally { Directory.Delete(folder, recursive: true); }
+    }
+}
