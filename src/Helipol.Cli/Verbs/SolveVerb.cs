@@ -65,6 +65,7 @@ public static class SolveVerb
         elements.AddRow("winding", p.Winding == Winding.Auto ? $"{PracticeScaling.WindingFor(p.Sense).ToString().ToLowerInvariant()} (builders' rule)" : p.Winding.ToString().ToLowerInvariant(),
             p.Winding == Winding.Auto ? "practice scaling" : "design file");
         console.Write(elements);
-        console.WriteLine("Practice scaling is the 5.8 GHz rule of thumb scaled by wavelength; it is not a solved result.");
+        console.WriteLine("Practice scaling: the 5.8 GHz rule of thumb scaled by wavelength.");
+        console.WriteLine("It is a starting point, not a solved result.");
     }
 }
