@@ -34,6 +34,7 @@ internal sealed class InteractionTable
     internal bool[] Image = [], Subtracted = [];
     internal double[] TangentDot = [], S00 = [], S10 = [], S01 = [], S11 = [];
     internal double[] R = [], W = [], WU = [], WV = [], WUV = [];
+    internal double[] InverseR = [], StaticOffset = [];
 
     public int PairCount => P.Length;
 
@@ -131,9 +132,50 @@ internal sealed class InteractionTable
         TangentDot = _tangentDot.ToArray(); Start = _start.ToArray(); Count = _count.ToArray();
         S00 = _s00.ToArray(); S10 = _s10.ToArray(); S01 = _s01.ToArray(); S11 = _s11.ToArray();
         R = _r.ToArray(); W = _w.ToArray(); WU = _wu.ToArray(); WV = _wv.ToArray(); WUV = _wuv.ToArray();
+        InverseR = R.Select(r => 1 / r).ToArray();
+        StaticOffset = new double[R.Length];
+        for (int e = 0; e < P.Length; e++)
+            if (Subtracted[e]) Array.Fill(StaticOffset, 1.0, Start[e], Count[e]);
     }
 
-    /// <summary>The four kernel moments of pair <paramref name="e"/> at wavenumber k (rad/m).</summary>
+    public int PointCount => R.Length;
+
+    /// <summary>
+    /// Kernel value at every quadrature point at wavenumber k: g = (e^{−jkR} − s)/R with s = 1 where the
+    /// static part was taken out. Scalar Math.SinCos on purpose: the SIMD sine and cosine of the runtime
+    /// may fuse multiply-adds differently before and after the JIT re-optimizes a method, which made two
+    /// solves of the same frequency differ in the last bits; results here must be bit-reproducible.
+    /// </summary>
+    public void KernelValues(double k, Span<double> real, Span<double> imaginary)
+    {
+        int n = R.Length, i = 0;
+        for (; i < n; i++)
+        {
+            var (sin, cos) = Math.SinCos(k * R[i]);
+            real[i] = (cos - StaticOffset[i]) * InverseR[i];
+            imaginary[i] = -sin * InverseR[i];
+        }
+    }
+
+    /// <summary>The four kernel moments of pair <paramref name="e"/> from precomputed kernel values.</summary>
+    public void Moments(int e, ReadOnlySpan<double> gr, ReadOnlySpan<double> gi, out Complex i00, out Complex i10, out Complex i01, out Complex i11)
+    {
+        double r00 = 0, x00 = 0, r10 = 0, x10 = 0, r01 = 0, x01 = 0, r11 = 0, x11 = 0;
+        int end = Start[e] + Count[e];
+        double[] w = W, wu = WU, wv = WV, wuv = WUV;
+        for (int i = Start[e]; i < end; i++)
+        {
+            double a = gr[i], b = gi[i];
+            r00 += w[i] * a; x00 += w[i] * b;
+            r10 += wu[i] * a; x10 += wu[i] * b;
+            r01 += wv[i] * a; x01 += wv[i] * b;
+            r11 += wuv[i] * a; x11 += wuv[i] * b;
+        }
+        if (Subtracted[e]) { r00 += S00[e]; r10 += S10[e]; r01 += S01[e]; r11 += S11[e]; }
+        i00 = new Complex(r00, x00); i10 = new Complex(r10, x10); i01 = new Complex(r01, x01); i11 = new Complex(r11, x11);
+    }
+
+    /// <summary>The four kernel moments of pair <paramref name="e"/> at wavenumber k (rad/m), plain scalar reference.</summary>
     public void Moments(int e, double k, out Complex i00, out Complex i10, out Complex i01, out Complex i11)
     {
         double r00 = 0, x00 = 0, r10 = 0, x10 = 0, r01 = 0, x01 = 0, r11 = 0, x11 = 0;
