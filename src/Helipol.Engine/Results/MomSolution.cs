@@ -96,7 +96,12 @@ public sealed class MomSolution
     }
 
     /// <summary>Far field r·E (volts) in direction (θ, φ); zero below a perfect ground.</summary>
-    public FarField FarFieldAt(double thetaRad, double phiRad) => _radiators.At(thetaRad, phiRad);
+    public FarField FarFieldAt(double thetaRad, double phiRad)
+    {
+        if (!double.IsFinite(thetaRad) || !double.IsFinite(phiRad))
+            throw new ArgumentOutOfRangeException(nameof(thetaRad), FormattableString.Invariant($"direction: found θ = {thetaRad}, φ = {phiRad} rad, allowed finite angles"));
+        return _radiators.At(thetaRad, phiRad);
+    }
 
     /// <summary>Directivity 4πU/P_rad (ratio, not dB).</summary>
     public double DirectivityAt(double thetaRad, double phiRad)

@@ -74,3 +74,15 @@ public class ValidationTests
     public void RefusesWireTooThickForTheFrequency() =>
         Assert.Contains("too thick", Refusal(Antennas.Dipole(3, 0.05), 3e8));
 }
+
+public class ResultGuardTests
+{
+    // NaN never leaves the engine: a non-finite direction is refused rather than answered with NaN.
+    [Fact]
+    public void RefusesNonFiniteDirection()
+    {
+        var s = Antennas.Solve(Antennas.Dipole(0.5, 1e-3));
+        Assert.Throws<ArgumentOutOfRangeException>(() => s.GainAt(double.NaN, 0));
+        Assert.Throws<ArgumentOutOfRangeException>(() => s.FarFieldAt(0, double.PositiveInfinity));
+    }
+}
