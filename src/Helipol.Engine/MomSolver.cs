@@ -38,7 +38,7 @@ public static class MomSolver
         CheckFrequency(mesh, frequencyHz);
         int n = mesh.UnknownCount;
         // One matrix buffer per thread, reused across the frequencies of a sweep (the LU overwrites it).
-        if (_matrix is null || _matrix.Length != n * n) _matrix = new Complex[n * n];
+        if (_matrix is null || _matrix.Length < n * n) _matrix = new Complex[n * n];
         var z = _matrix;
         FillMatrix(mesh, frequencyHz, z, useReferenceFill);
         var rhs = new Complex[n];

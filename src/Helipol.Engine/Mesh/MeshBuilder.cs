@@ -258,7 +258,7 @@ internal static class MeshBuilder
         {
             1 => nodeBases[best][0],
             0 => throw new ModelException(F($"{field}: found the free wire end {nodes[best]}, allowed a node between two segments or a wire end on the ground")),
-            _ => throw new ModelException(F($"{field}: found a junction of {nodeBases[best].Count + 1} wire ends at {nodes[best]}, allowed a node between two segments")),
+            _ => throw new ModelException(F($"{field}: found a junction of several wire ends at {nodes[best]}, allowed a node between two segments or a single wire end on the ground")),
         };
     }
 

@@ -51,6 +51,13 @@ public class ValidationTests
         Assert.Contains("free wire end", Refusal(new WireModel(new[] { Good }, GroundPlane.None, new[] { new VoltageSource(new Vector3(0, 0, 0.25), 1) })));
 
     [Fact]
+    public void RefusesSourceAtAJunction()
+    {
+        var branch = Wire.Straight(new Vector3(0, 0, 0), new Vector3(0.2, 0, 0.1), 1e-3);
+        Assert.Contains("junction", Refusal(With(Good, branch)));
+    }
+
+    [Fact]
     public void RefusesWireBelowGround() =>
         Assert.Contains("below the ground", Refusal(Antennas.Dipole(0.5, 1e-3) with { Ground = GroundPlane.PerfectAtZ0 }));
 
