@@ -27,7 +27,8 @@ internal sealed class InteractionTable
     private readonly List<double> _tangentDot = new();
     private readonly List<double> _s00 = new(), _s10 = new(), _s01 = new(), _s11 = new();
     private readonly List<int> _start = new(), _count = new();
-    private readonly List<double> _r = new(), _w = new(), _wu = new(), _wv = new(), _wuv = new();
+    private double[] _r = new double[1024], _w = new double[1024], _wu = new double[1024], _wv = new double[1024], _wuv = new double[1024];
+    private int _points;
 
     // Frozen arrays for the hot loop.
     internal int[] P = [], Q = [], Start = [], Count = [];
@@ -77,7 +78,10 @@ internal sealed class InteractionTable
         Vector3 q0 = image ? sq.Start.MirroredInGround : sq.Start;
         Vector3 q1 = image ? sq.End.MirroredInGround : sq.End;
         double lmax = Math.Max(sp.LengthM, sq.LengthM);
-        double dmin = Geometry3.SegmentDistance(sp.Start, sp.End, q0, q1);
+        Vector3 qc = 0.5 * (q0 + q1);
+        double bound = Vector3.Distance(sp.Centre, qc) - 0.5 * (sp.LengthM + sq.LengthM);
+        // Far beyond every threshold below: the exact distance cannot change the rule.
+        double dmin = bound >= 3 * lmax ? bound : Geometry3.SegmentDistance(sp.Start, sp.End, q0, q1);
         if (dmin < lmax)
             Add(segs, p, q, image, GaussLegendre.EndClustered(dmin < 0.1 * lmax ? 12 : 8), GaussLegendre.OnUnitInterval(4), true);
         else
@@ -104,7 +108,10 @@ internal sealed class InteractionTable
 
         _p.Add(p); _q.Add(q); _image.Add(image); _subtracted.Add(subtract);
         _tangentDot.Add(Vector3.Dot(sp.Direction, tq));
-        _start.Add(_r.Count);
+        _start.Add(_points);
+        int needed = _points + outer.Nodes.Length * inner.Nodes.Length;
+        if (needed > _r.Length) Grow(Math.Max(needed, 2 * _r.Length));
+        double lq = sq.LengthM;
         double s00 = 0, s10 = 0, s01 = 0, s11 = 0;
         for (int i = 0; i < outer.Nodes.Length; i++)
         {
@@ -112,19 +119,26 @@ internal sealed class InteractionTable
             Vector3 r = sp.PointAt(u);
             if (subtract)
             {
-                var (c0, c1) = StaticLineIntegrals.Over(r, q0, tq, sq.LengthM, a2);
+                var (c0, c1) = StaticLineIntegrals.Over(r, q0, tq, lq, a2);
                 s00 += wi * c0; s10 += wi * u * c0; s01 += wi * c1; s11 += wi * u * c1;
             }
             for (int j = 0; j < inner.Nodes.Length; j++)
             {
                 double v = inner.Nodes[j], w = wi * inner.Weights[j];
-                Vector3 rq = q0 + (v * sq.LengthM) * tq;
+                Vector3 rq = q0 + (v * lq) * tq;
                 double dist = Math.Sqrt((r - rq).LengthSquared + a2);
-                _r.Add(dist); _w.Add(w); _wu.Add(w * u); _wv.Add(w * v); _wuv.Add(w * u * v);
+                _r[_points] = dist; _w[_points] = w; _wu[_points] = w * u; _wv[_points] = w * v; _wuv[_points] = w * u * v;
+                _points++;
             }
         }
-        _count.Add(_r.Count - _start[^1]);
+        _count.Add(_points - _start[^1]);
         _s00.Add(s00); _s10.Add(s10); _s01.Add(s01); _s11.Add(s11);
+    }
+
+    private void Grow(int size)
+    {
+        Array.Resize(ref _r, size); Array.Resize(ref _w, size); Array.Resize(ref _wu, size);
+        Array.Resize(ref _wv, size); Array.Resize(ref _wuv, size);
     }
 
     private void Freeze()
@@ -132,8 +146,9 @@ internal sealed class InteractionTable
         P = _p.ToArray(); Q = _q.ToArray(); Image = _image.ToArray(); Subtracted = _subtracted.ToArray();
         TangentDot = _tangentDot.ToArray(); Start = _start.ToArray(); Count = _count.ToArray();
         S00 = _s00.ToArray(); S10 = _s10.ToArray(); S01 = _s01.ToArray(); S11 = _s11.ToArray();
-        R = _r.ToArray(); W = _w.ToArray(); WU = _wu.ToArray(); WV = _wv.ToArray(); WUV = _wuv.ToArray();
-        InverseR = R.Select(r => 1 / r).ToArray();
+        R = _r[.._points]; W = _w[.._points]; WU = _wu[.._points]; WV = _wv[.._points]; WUV = _wuv[.._points];
+        InverseR = new double[_points];
+        for (int i = 0; i < _points; i++) InverseR[i] = 1 / R[i];
         StaticOffset = new double[R.Length];
         for (int e = 0; e < P.Length; e++)
             if (Subtracted[e]) Array.Fill(StaticOffset, 1.0, Start[e], Count[e]);

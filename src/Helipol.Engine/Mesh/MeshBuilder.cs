@@ -184,6 +184,7 @@ internal static class MeshBuilder
                 var sq = segs[q];
                 if (sp.StartNode == sq.StartNode || sp.StartNode == sq.EndNode || sp.EndNode == sq.StartNode || sp.EndNode == sq.EndNode)
                     continue;
+                if (Geometry3.DistanceLowerBound(sp, sq) >= sp.RadiusM + sq.RadiusM) continue;
                 double d = Geometry3.SegmentDistance(sp.Start, sp.End, sq.Start, sq.End);
                 if (d < sp.RadiusM + sq.RadiusM)
                     throw new ModelException(F($"wires[{sp.WireIndex}] and wires[{sq.WireIndex}]: found surfaces touching or crossing near {sp.Centre} (axes {d * 1e3:0.###} mm apart), allowed at least the sum of radii ({(sp.RadiusM + sq.RadiusM) * 1e3:0.###} mm) unless joined at a shared point"));
