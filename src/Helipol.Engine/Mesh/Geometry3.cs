@@ -1,6 +1,6 @@
 namespace Helipol.Engine.Mesh;
 
-/// <summary>Small geometric helpers for segments.</summary>
+/// <summary>Distances between segments.</summary>
 internal static class Geometry3
 {
     /// <summary>

@@ -28,6 +28,10 @@ internal static class MeshBuilder
             throw new ModelException(F($"frequency: found {maxFrequencyHz} Hz, allowed a finite value > 0"));
         if (!(options.SegmentsPerWavelength >= 1 && double.IsFinite(options.SegmentsPerWavelength)))
             throw new ModelException(F($"segmentation: found {options.SegmentsPerWavelength} segments per wavelength, allowed ≥ 1"));
+        if (options.MinimumSegmentsPerWire < 1)
+            throw new ModelException(F($"segmentation: found {options.MinimumSegmentsPerWire} minimum segments per wire, allowed ≥ 1"));
+        if (!(double.IsFinite(options.MinimumLengthInRadii) && options.MinimumLengthInRadii > 0))
+            throw new ModelException(F($"segmentation: found {options.MinimumLengthInRadii} minimum segment length in radii, allowed a finite value > 0"));
         if (model.Wires is null || model.Wires.Count == 0) throw new ModelException("wires: none given, allowed one or more");
         if (model.Sources is null || model.Sources.Count == 0) throw new ModelException("sources: none given, allowed one or more voltage sources");
 

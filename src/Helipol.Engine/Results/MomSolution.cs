@@ -62,6 +62,9 @@ public sealed class MomSolution
     /// <summary>Frequency of this solution, Hz.</summary>
     public double FrequencyHz { get; }
 
+    /// <summary>Number of voltage sources, in the order of <see cref="WireModel.Sources"/>.</summary>
+    public int SourceCount => _mesh.SourceBases.Length;
+
     /// <summary>Current through source <paramref name="sourceIndex"/> in its reference direction, A.</summary>
     public Complex InputCurrentA(int sourceIndex = 0) => _basisCurrents[SourceBasis(sourceIndex)];
 
