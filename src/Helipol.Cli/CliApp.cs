@@ -1,11 +1,53 @@
+using System.CommandLine;
+using Helipol.Cli.Verbs;
+
 namespace Helipol.Cli;
 
-/// <summary>Builds the command tree. Each verb lives in its own file under Verbs/.</summary>
+/// <summary>
+/// Builds the command tree and runs it. Exit codes: 0 ok, 1 runtime failure (I/O, internal),
+/// 2 bad input (design file or command line). Errors are one line on stderr, never a stack trace.
+/// </summary>
 public static class CliApp
 {
-    public static int Run(string[] args)
+    public static int Run(string[] args) => Run(args, Console.Out, Console.Error);
+
+    /// <summary>Runs with the given writers; tests call this in-process.</summary>
+    public static int Run(string[] args, TextWriter output, TextWriter error)
     {
-        Console.Error.WriteLine("helipol: no verbs yet");
-        return 2;
+        var console = new CliConsole(output, error);
+        var root = new RootCommand("helipol: designs parasitic helical polarizers that make a linear whip antenna circularly polarized, and writes the files to build them.");
+        root.Subcommands.Add(CheckVerb.Create(console));
+        root.Subcommands.Add(SolveVerb.Create(console));
+        root.Subcommands.Add(BuildVerb.Create(console));
+        root.Subcommands.Add(NewVerb.Create(console));
+        root.Subcommands.Add(SchemaVerb.Create(console));
+
+        var parsed = root.Parse(args);
+        if (parsed.Errors.Count > 0)
+        {
+            error.WriteLine($"helipol: {parsed.Errors[0].Message} (see 'helipol --help')");
+            return ExitCodes.BadInput;
+        }
+        try
+        {
+            return parsed.Invoke(new InvocationConfiguration { Output = output, Error = error, EnableDefaultExceptionHandler = false });
+        }
+        catch (Exception ex) when (ex is IOException or UnauthorizedAccessException)
+        {
+            error.WriteLine($"helipol: {ex.Message}");
+            return ExitCodes.Failure;
+        }
+        catch (Exception ex)
+        {
+            error.WriteLine($"helipol: internal error: {ex.GetType().Name}: {ex.Message}");
+            return ExitCodes.Failure;
+        }
     }
+}
+
+public static class ExitCodes
+{
+    public const int Ok = 0;
+    public const int Failure = 1;
+    public const int BadInput = 2;
 }

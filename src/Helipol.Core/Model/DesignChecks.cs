@@ -1,0 +1,73 @@
+using Helipol.Spec;
+
+namespace Helipol.Model;
+
+/// <summary>
+/// Checks across keys: things that cannot be built or cannot work, each reported at the key a user
+/// would change. Per-key limits (ranges, units) were already checked by the Spec layer.
+/// </summary>
+public static class DesignChecks
+{
+    public static void Check(SpecDocument doc, PolarizerDesign design, SpecErrors errors)
+    {
+        var p = design.Polarizer;
+        var former = p.Former;
+        string L(double m) => QuantityKind.Length.FormatSi(m);
+
+        // The former must slide over the whip (or its cover).
+        var fitsOver = design.Whip.CoverDiameterM ?? design.Whip.DiameterM;
+        if (design.Whip.CoverDiameterM is { } cover && cover <= design.Whip.DiameterM)
+            errors.Add(doc.MarkOf("whip.cover_diameter"), "whip.cover_diameter", doc.WrittenOf("whip.cover_diameter"), $"larger than whip.diameter ({doc.WrittenOf("whip.diameter")})");
+        else if (fitsOver > former.BoreM)
+        {
+            var key = design.Whip.CoverDiameterM is null ? "whip.diameter" : "whip.cover_diameter";
+            errors.Add(doc.MarkOf(key), key, doc.WrittenOf(key), $"at most polarizer.former.bore ({doc.WrittenOf("polarizer.former.bore")}) so the former slides over it");
+        }
+
+        if (former.OuterDiameterM is { } outer)
+        {
+            if (former.BoreM >= outer)
+                errors.Add(doc.MarkOf("polarizer.former.bore"), "polarizer.former.bore", doc.WrittenOf("polarizer.former.bore"),
+                    $"smaller than polarizer.former.outer_diameter ({doc.WrittenOf("polarizer.former.outer_diameter")})");
+            else
+            {
+                var wall = (outer - former.BoreM) / 2;
+                if (p.Wire.DiameterM >= wall)
+                    errors.Add(doc.MarkOf("polarizer.wire.diameter"), "polarizer.wire.diameter", doc.WrittenOf("polarizer.wire.diameter"),
+                        $"thinner than the former wall ({L(wall)} = (outer_diameter − bore)/2)");
+            }
+        }
+
+        if (p.ElementRiseM is { } rise)
+        {
+            if (p.ElementLengthM is { } length && rise >= length)
+                errors.Add(doc.MarkOf("polarizer.element_rise"), "polarizer.element_rise", doc.WrittenOf("polarizer.element_rise"),
+                    $"less than polarizer.element_length ({doc.WrittenOf("polarizer.element_length")}): a wire cannot climb more than its length");
+            else if (rise > former.HeightM)
+                errors.Add(doc.MarkOf("polarizer.element_rise"), "polarizer.element_rise", doc.WrittenOf("polarizer.element_rise"),
+                    $"at most polarizer.former.height ({doc.WrittenOf("polarizer.former.height")}) so the elements stay on the former");
+        }
+
+        var layout = design.Practice;
+        if (design.Whip.Kind == WhipKind.Monopole && p.CentreHeightM - layout.RiseM / 2 < p.Wire.RadiusM)
+            errors.Add(doc.MarkOf("polarizer.centre_height"), "polarizer.centre_height", doc.WrittenOf("polarizer.centre_height"),
+                $"at least {L(layout.RiseM / 2 + p.Wire.RadiusM)} on a monopole so the elements (rise {L(layout.RiseM)}) stay above the ground plane");
+
+        // Elements touching one another: only decidable when the user pinned length and rise.
+        if (p.ElementLengthM is not null && p.ElementRiseM is not null && layout.RiseM < layout.LengthM)
+        {
+            var gap = ElementClearance.MinimumAxisDistanceM(layout);
+            if (gap < p.Wire.DiameterM)
+                errors.Add(doc.MarkOf("polarizer.element_length"), "polarizer.element_length", doc.WrittenOf("polarizer.element_length"),
+                    $"elements that keep clear of each other: {layout.Count} elements of this length and rise come within {L(gap)} of each other, less than the wire diameter ({L(p.Wire.DiameterM)})");
+        }
+
+        // A former must fit on the board it is cut from.
+        var ringMm = p.OuterDiameterOrPracticeM(design.Band.CenterHz) * 1e3 + 2 * design.Fabrication.KerfMm;
+        var boardMm = Math.Min(design.Fabrication.BoardWidthMm, design.Fabrication.BoardHeightMm);
+        if (ringMm > boardMm)
+            errors.Add(doc.MarkOf("fabrication.board"), "fabrication.board",
+                $"a board {doc.WrittenOf("fabrication.board.width")} by {doc.WrittenOf("fabrication.board.height")}",
+                $"a board at least {ringMm.ToString("0.##", System.Globalization.CultureInfo.InvariantCulture)} mm each way for one ring");
+    }
+}
