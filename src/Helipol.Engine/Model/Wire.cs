@@ -1,0 +1,13 @@
+namespace Helipol.Engine;
+
+/// <summary>
+/// A thin wire laid along a polyline. Points are in metres; every vertex becomes a segment node, so
+/// bends are respected. Polylines that share an end point or vertex are joined there (a junction);
+/// an end that touches nothing is a free end and carries no current.
+/// </summary>
+public sealed record Wire(IReadOnlyList<Vector3> PointsM, double RadiusM, Conductor Conductor, DielectricCoating? Coating = null)
+{
+    /// <summary>A straight lossless wire between two points.</summary>
+    public static Wire Straight(Vector3 fromM, Vector3 toM, double radiusM, Conductor? conductor = null) =>
+        new(new[] { fromM, toM }, radiusM, conductor ?? PerfectConductor.Instance);
+}
