@@ -1,0 +1,45 @@
+using Helipol.Engine;
+
+namespace Helipol.Tests.Engine;
+
+/// <summary>Reference structures for the engine checks, at a wavelength of 1 m unless stated.</summary>
+internal static class Antennas
+{
+    /// <summary>f = c, so λ = 1 m and lengths read directly in wavelengths.</summary>
+    public const double OneMetreWavelengthHz = PhysicalConstants.SpeedOfLight;
+
+    /// <summary>Centre-fed straight dipole along z, a vertex at the feed so a node sits there.</summary>
+    public static WireModel Dipole(double lengthM, double radiusM, Conductor? conductor = null, System.Numerics.Complex? volts = null) =>
+        new(new[]
+            {
+                new Wire(new Vector3[] { new(0, 0, -lengthM / 2), new(0, 0, 0), new(0, 0, lengthM / 2) }, radiusM,
+                    conductor ?? PerfectConductor.Instance),
+            },
+            GroundPlane.None,
+            new[] { new VoltageSource(new Vector3(0, 0, 0), volts ?? 1) });
+
+    /// <summary>Vertical monopole standing on a perfect ground, fed at its base.</summary>
+    public static WireModel Monopole(double heightM, double radiusM) =>
+        new(new[] { Wire.Straight(new Vector3(0, 0, 0), new Vector3(0, 0, heightM), radiusM) },
+            GroundPlane.PerfectAtZ0,
+            new[] { new VoltageSource(new Vector3(0, 0, 0), 1) });
+
+    /// <summary>Regular polygon loop of <paramref name="sides"/> straight wires in the xy plane, fed at one vertex.</summary>
+    public static WireModel PolygonLoop(double circumscribedRadiusM, int sides, double wireRadiusM)
+    {
+        var points = new List<Vector3>();
+        for (int i = 0; i <= sides; i++)
+        {
+            double t = 2 * Math.PI * (i % sides) / sides;
+            points.Add(new Vector3(circumscribedRadiusM * Math.Cos(t), circumscribedRadiusM * Math.Sin(t), 0));
+        }
+        return new WireModel(new[] { new Wire(points, wireRadiusM, PerfectConductor.Instance) }, GroundPlane.None,
+            new[] { new VoltageSource(points[sides / 2], 1) });
+    }
+
+    public static double PolygonArea(double circumscribedRadiusM, int sides) =>
+        0.5 * sides * circumscribedRadiusM * circumscribedRadiusM * Math.Sin(2 * Math.PI / sides);
+
+    public static MomSolution Solve(WireModel model, double frequencyHz = OneMetreWavelengthHz, SegmentationOptions? options = null) =>
+        MomSolver.Solve(MeshedModel.Create(model, frequencyHz, options), frequencyHz);
+}
