@@ -21,6 +21,11 @@ public static class CliApp
         root.Subcommands.Add(BuildVerb.Create(console));
         root.Subcommands.Add(NewVerb.Create(console));
         root.Subcommands.Add(SchemaVerb.Create(console));
+        root.Subcommands.Add(AnalyzeVerb.Create(console));
+        root.Subcommands.Add(SweepVerb.Create(console));
+        root.Subcommands.Add(ToleranceVerb.Create(console));
+        root.Subcommands.Add(CalibrateVerb.Create(console));
+        root.Subcommands.Add(MismatchVerb.Create(console));
 
         var parsed = root.Parse(args);
         if (parsed.Errors.Count > 0)

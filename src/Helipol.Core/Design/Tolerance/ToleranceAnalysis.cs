@@ -81,12 +81,17 @@ public static class ToleranceAnalysis
         double fH = (BestArFrequencyHz(design, Shift(0, step), counter) - BestArFrequencyHz(design, Shift(0, -step), counter)) / (2 * step * 1e3) / 1e6;
         double trim = TrimAt5800MHzM * scale;
         double move = -trim * 1e3 * fL;
-        string hint = FormattableString.Invariant($"trimming {trim * 1e3:0.0#} mm off every element moves the best-AR frequency {(move >= 0 ? "up" : "down")} about {Math.Abs(move):0} MHz");
+        string hint = double.IsFinite(move)
+            ? FormattableString.Invariant($"trimming {trim * 1e3:0.0#} mm off every element moves the best-AR frequency {(move >= 0 ? "up" : "down")} about {Math.Abs(move):0} MHz")
+            : "no trimming hint: the axial ratio has no minimum within ±8 % of the band centre, so trimming cannot be tied to a best-AR frequency";
         return new ToleranceResult(count, t.Seed, yield, worst, Percentile(sorted, 0.1), Percentile(sorted, 0.5), Percentile(sorted, 0.9),
             arL, arH, fL, fH, trim, hint, counter.Count - before);
     }
 
-    /// <summary>Frequency of the best worst-AR score on the analysis cone, over band ± 8 % in 33 steps with a parabolic refinement.</summary>
+    /// <summary>
+    /// Frequency of the best mean-AR score on the analysis cone, over the centre ± 8 % in 33 steps
+    /// with a parabolic refinement; NaN when the lowest sample is at either end (no minimum inside).
+    /// </summary>
     public static double BestArFrequencyHz(PolarizerDesign design, PolarizerBuild build, FieldSolveCounter? counter = null)
     {
         double fc = design.Band.CenterHz;
@@ -94,7 +99,7 @@ public static class ToleranceAnalysis
         var cone = ObservationSet.Cone(AnalysisCone.DefaultElevationRad(design.Whip.Kind), AzimuthStepRad);
         var score = PolarizerEvaluator.Evaluate(build, freqs, cone, design.Polarizer.Sense, counter).Select(p => p.MeanScoreDb).ToArray();
         int k = Array.IndexOf(score, score.Min());
-        if (k == 0 || k == score.Length - 1) return freqs[k];
+        if (k == 0 || k == score.Length - 1) return double.NaN;
         double a = score[k - 1], b = score[k], c = score[k + 1];
         double denom = a - 2 * b + c;
         double shift = denom > 0 ? 0.5 * (a - c) / denom : 0;

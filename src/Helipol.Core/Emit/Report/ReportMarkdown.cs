@@ -81,7 +81,10 @@ public static class ReportMarkdown
         L($"- yield (worst AR ≤ 3 dB): {tolerance.Yield * 100:0.#} %");
         L($"- worst AR percentiles: 10 % {tolerance.ArP10Db:0.0} dB, median {tolerance.ArP50Db:0.0} dB, 90 % {tolerance.ArP90Db:0.0} dB");
         L($"- sensitivity at the centre: {tolerance.ArPerMmLengthDb:+0.0;−0.0} dB of AR per mm of length, {tolerance.ArPerMmRiseDb:+0.0;−0.0} dB per mm of rise");
-        L($"- best-AR frequency: {tolerance.BestArMHzPerMmLength:+0;−0} MHz per mm of length, {tolerance.BestArMHzPerMmRise:+0;−0} MHz per mm of rise");
+        if (double.IsFinite(tolerance.BestArMHzPerMmLength) && double.IsFinite(tolerance.BestArMHzPerMmRise))
+            L($"- best-AR frequency: {tolerance.BestArMHzPerMmLength:+0;−0} MHz per mm of length, {tolerance.BestArMHzPerMmRise:+0;−0} MHz per mm of rise");
+        else
+            L($"- best-AR frequency: no minimum within ±8 % of the centre, so its sensitivity is not defined");
         L($"- {tolerance.TrimmingHint}.");
         L($"");
         L($"## Practice scaling beside the solution");
