@@ -27,8 +27,12 @@ public sealed record Surroundings(
     /// <summary>No dielectric anywhere: the wire in air.</summary>
     public static Surroundings None { get; } = new(1, 1, 0, 1, 0, DefaultCoveredFraction, 1);
 
+    /// <summary>
+    /// From a design. An <c>air</c> former means no former at all: it counts as vacuum (εr = 1), so
+    /// <c>pec</c> wire, <c>air</c> and <c>wrap: none</c> give a model with no dielectric.
+    /// </summary>
     public static Surroundings From(Polarizer p, double calibrationFactor) => new(
-        p.Former.RelativePermittivity.Value,
+        p.Former.Material.Key == "air" && p.Former.RelativePermittivity.Source != Helipol.Model.Materials.SourcedValue.DesignFile ? 1 : p.Former.RelativePermittivity.Value,
         p.Glue?.RelativePermittivity.Value ?? 1, p.Glue?.ThicknessM ?? 0,
         p.Wrap?.RelativePermittivity.Value ?? 1, p.Wrap?.TotalThicknessM ?? 0,
         DefaultCoveredFraction, calibrationFactor);
