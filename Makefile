@@ -7,7 +7,7 @@ DESIGNS := $(sort $(wildcard designs/*.yaml))
 # Outside readers the tests use (Debian packages): ezdxf for DXF, admesh for STL, poppler for PDF pages.
 APT_PACKAGES := python3-ezdxf admesh poppler-utils
 
-.PHONY: all build run test bench deps clean
+.PHONY: all build run test bench deps clean schema
 
 all: build
 
@@ -23,6 +23,9 @@ run: build
 
 test: deps
 	@bash .ci/test.sh $(CONFIG)
+
+schema: build
+	$(DOTNET) $(CLI_DLL) schema -o designs/helipol.schema.json
 
 bench:
 	$(DOTNET) run --project tests/Helipol.Bench -c Release -- $(BENCH_ARGS)

@@ -27,6 +27,9 @@ public static class CliApp
         root.Subcommands.Add(CalibrateVerb.Create(console));
         root.Subcommands.Add(MismatchVerb.Create(console));
 
+        foreach (var option in root.Options.OfType<VersionOption>())
+            option.Action = new PrintVersion(output);
+
         var parsed = root.Parse(args);
         if (parsed.Errors.Count > 0)
         {
@@ -47,6 +50,18 @@ public static class CliApp
             error.WriteLine($"helipol: internal error: {ex.GetType().Name}: {ex.Message}");
             return ExitCodes.Failure;
         }
+    }
+}
+
+/// <summary>Prints this program's version (not the host's, which is what a test runner would report).</summary>
+internal sealed class PrintVersion(TextWriter output) : System.CommandLine.Invocation.SynchronousCommandLineAction
+{
+    public override int Invoke(ParseResult parseResult)
+    {
+        var attribute = typeof(CliApp).Assembly.GetCustomAttributes(typeof(System.Reflection.AssemblyInformationalVersionAttribute), false)
+            .OfType<System.Reflection.AssemblyInformationalVersionAttribute>().FirstOrDefault();
+        output.WriteLine(attribute?.InformationalVersion ?? typeof(CliApp).Assembly.GetName().Version?.ToString() ?? "unknown");
+        return ExitCodes.Ok;
     }
 }
 

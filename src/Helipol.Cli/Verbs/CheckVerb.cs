@@ -1,4 +1,6 @@
 using System.CommandLine;
+using Helipol.Model;
+using Helipol.Spec;
 
 namespace Helipol.Cli.Verbs;
 
@@ -8,14 +10,27 @@ public static class CheckVerb
     public static Command Create(CliConsole console)
     {
         var files = new Argument<string[]>("FILE") { Description = "design files (.yaml)", Arity = ArgumentArity.OneOrMore };
-        var command = new Command("check", "Check design files and report every problem; writes nothing.") { files };
+        var command = new Command("check", "Check design files, report every problem and warning; writes nothing.") { files };
         command.SetAction(parse =>
         {
-            var designs = DesignLoader.LoadAll(parse.GetValue(files)!, console);
-            if (designs is null) return ExitCodes.BadInput;
-            foreach (var design in designs)
-                console.Out.WriteLine($"{design.SourceFile}: ok ({design.Name})");
-            return ExitCodes.Ok;
+            var bad = false;
+            foreach (var file in parse.GetValue(files)!)
+            {
+                try
+                {
+                    var doc = SpecReader.ReadFile(file, file);
+                    var design = DesignResolver.Resolve(doc);
+                    var warnings = DesignWarnings.For(doc, design);
+                    console.Out.WriteLine($"{file}: ok ({design.Name}){(warnings.Count > 0 ? $", {warnings.Count} warning(s)" : "")}");
+                    foreach (var warning in warnings) console.Out.WriteLine(warning.ToString());
+                }
+                catch (DesignInputException ex)
+                {
+                    foreach (var problem in ex.Errors) console.Error.WriteLine(problem.ToString());
+                    bad = true;
+                }
+            }
+            return bad ? ExitCodes.BadInput : ExitCodes.Ok;
         });
         return command;
     }

@@ -86,7 +86,9 @@ public static class SolveVerb
         elements.AddRow("mean gain, wanted sense", Db(s.MeanGainDbic) + "ic", "", "field model");
         console.Write(elements);
         console.WriteLine(string.Create(CultureInfo.InvariantCulture,
-            $"Calibration factor {s.Calibration.Factor:0.###} ({s.Calibration.Source}). {s.Search.Evaluations} geometries scored, {s.FieldSolves} field solves."));
+            $"Calibration factor {s.Calibration.Factor:0.###}: {s.Calibration.Source}."));
+        console.WriteLine(string.Create(CultureInfo.InvariantCulture, $"{s.Search.Evaluations} geometries scored, {s.FieldSolves} field solves."));
+        console.WriteLine("Practice scaling: the 5.8 GHz rule of thumb scaled by wavelength; not a solved result.");
     }
 
     private static string Db(double db) => db.ToString("0.0", CultureInfo.InvariantCulture) + " dB";

@@ -17,6 +17,13 @@ public sealed record YamlScalar(SourceMark Mark, string Value, bool IsPlain) : Y
 
     public override string Describe() => IsNull ? "an empty value" : Shorten(Value);
 
+    /// <summary>A user's key as it may appear in a field path: one line, at most 40 characters.</summary>
+    internal static string KeyText(string key)
+    {
+        var oneLine = key.Replace("\r", "\\r").Replace("\n", "\\n");
+        return oneLine.Length <= 40 ? oneLine : oneLine[..37] + "...";
+    }
+
     internal static string Shorten(string text)
     {
         var oneLine = text.Replace("\r", "\\r").Replace("\n", "\\n");

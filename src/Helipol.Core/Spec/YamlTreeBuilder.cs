@@ -37,6 +37,13 @@ public static partial class YamlTreeBuilder
         {
             throw Error(shownAs, ex.Start, "(syntax)", Describe(ex), "well-formed YAML");
         }
+        catch (Exception ex) when (ex is InvalidOperationException or ArgumentException or IndexOutOfRangeException)
+        {
+            // The scanner can fail outside its own exception type on some malformed input; the last
+            // event it produced is the best place we know.
+            var near = parser.Current is { } last ? last.End : new Mark();
+            throw Error(shownAs, near, "(syntax)", "YAML the parser cannot read after this point", "well-formed YAML");
+        }
     }
 
     private static YamlNode ReadNode(IParser parser, string file, string path, int depth, SpecErrors duplicates)
@@ -78,11 +85,12 @@ public static partial class YamlTreeBuilder
                     var keyNode = ReadNode(parser, file, path, depth + 1, duplicates);
                     if (keyNode is not YamlScalar key)
                         throw new DesignInputException(new SpecError(file, keyNode.Mark, shown, $"{keyNode.Describe()} used as a key", "plain text keys"));
-                    var keyPath = path.Length == 0 ? key.Value : $"{path}.{key.Value}";
+                    var keyText = YamlScalar.KeyText(key.Value);
+                    var keyPath = path.Length == 0 ? keyText : $"{path}.{keyText}";
                     var value = ReadNode(parser, file, keyPath, depth + 1, duplicates);
                     if (seen.TryGetValue(key.Value, out var first))
                     {
-                        duplicates.Add(key.Mark, keyPath, $"a second '{key.Value}' key (first at line {first.Line})", "each key once");
+                        duplicates.Add(key.Mark, keyPath, $"a second '{keyText}' key (first at line {first.Line})", "each key once");
                         continue;
                     }
                     seen.Add(key.Value, key.Mark);

@@ -41,11 +41,11 @@ public sealed class MappingField : FieldType
         var given = new HashSet<string>(StringComparer.Ordinal);
         foreach (var (key, value) in mapping.Entries)
         {
-            var keyPath = Join(path, key.Value);
+            var keyPath = Join(path, YamlScalar.KeyText(key.Value));
             var field = Fields.FirstOrDefault(f => f.Name == key.Value);
             if (field is null)
             {
-                Fail(context, key, keyPath, $"unknown key '{YamlScalarText(key.Value)}'", $"{KeyList}{Hint(key.Value, path)}");
+                Fail(context, key, keyPath, $"unknown key '{YamlScalar.KeyText(key.Value)}'", $"{KeyList}{Hint(key.Value, path)}");
                 continue;
             }
             given.Add(field.Name);
@@ -86,14 +86,13 @@ public sealed class MappingField : FieldType
 
     private string Hint(string key, string path)
     {
+        // A key that exists, spelled right, in another block is more likely misplaced than misspelled.
+        var elsewhere = AllPaths?.Invoke().Where(p => p.Contains('.') && p.Split('.')[^1] == key && p != Join(path, key))
+            .OrderBy(p => p, StringComparer.Ordinal).FirstOrDefault();
+        if (elsewhere is not null) return $" ('{key}' belongs under {elsewhere[..elsewhere.LastIndexOf('.')]})";
         var local = DidYouMean.Closest(key, Fields.Select(f => f.Name));
-        if (local is not null) return $" (did you mean '{local}'?)";
-        if (AllPaths is null) return "";
-        var elsewhere = AllPaths().Where(p => p.Split('.')[^1] == key && p != Join(path, key)).OrderBy(p => p, StringComparer.Ordinal).FirstOrDefault();
-        return elsewhere is null ? "" : $" ('{key}' belongs under {elsewhere[..elsewhere.LastIndexOf('.')]})";
+        return local is null ? "" : $" (did you mean '{local}'?)";
     }
-
-    private static string YamlScalarText(string key) => key.Length <= 40 ? key : key[..37] + "...";
 
     private static string Join(string path, string key) => path.Length == 0 ? key : $"{path}.{key}";
 
