@@ -7,13 +7,15 @@ namespace Helipol.Engine;
 /// <summary>Solves a <see cref="MeshedModel"/> at one frequency or over a sweep.</summary>
 public static class MomSolver
 {
+    [ThreadStatic] private static Complex[]? _matrix;
+
     /// <summary>
     /// Fills and solves the impedance matrix at <paramref name="frequencyHz"/> (0 &lt; f ≤ the mesh's
     /// maximum frequency). Throws <see cref="ModelException"/> for a frequency out of range or a
     /// singular system.
     /// </summary>
     public static MomSolution Solve(MeshedModel mesh, double frequencyHz) =>
-        Solve(mesh, frequencyHz, MathNetLuSolver.Instance, useReferenceFill: false);
+        Solve(mesh, frequencyHz, DenseLuSolver.Instance, useReferenceFill: false);
 
     /// <summary>
     /// Solves every frequency, in parallel over frequencies (each its own matrix), reusing the mesh's
@@ -35,7 +37,9 @@ public static class MomSolver
         ArgumentNullException.ThrowIfNull(mesh);
         CheckFrequency(mesh, frequencyHz);
         int n = mesh.UnknownCount;
-        var z = new Complex[n * n];
+        // One matrix buffer per thread, reused across the frequencies of a sweep (the LU overwrites it).
+        if (_matrix is null || _matrix.Length < n * n) _matrix = new Complex[n * n];
+        var z = _matrix;
         FillMatrix(mesh, frequencyHz, z, useReferenceFill);
         var rhs = new Complex[n];
         for (int i = 0; i < mesh.SourceBases.Length; i++) rhs[mesh.SourceBases[i]] += mesh.SourceVolts[i];

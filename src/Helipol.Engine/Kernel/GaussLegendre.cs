@@ -6,6 +6,7 @@ namespace Helipol.Engine.Kernel;
 internal static class GaussLegendre
 {
     private static readonly (double[] Nodes, double[] Weights)?[] Cache = new (double[], double[])?[33];
+    private static readonly (double[] Nodes, double[] Weights)?[] Clustered = new (double[], double[])?[33];
     private static readonly object Gate = new();
 
     public static (double[] Nodes, double[] Weights) OnUnitInterval(int order)
@@ -27,6 +28,8 @@ internal static class GaussLegendre
     /// </summary>
     public static (double[] Nodes, double[] Weights) EndClustered(int order)
     {
+        lock (Gate)
+            if (Clustered[order] is { } hit) return hit;
         var (t, w) = OnUnitInterval(order);
         var u = new double[order];
         var wu = new double[order];
@@ -35,6 +38,7 @@ internal static class GaussLegendre
             u[i] = t[i] * t[i] * (3 - 2 * t[i]);
             wu[i] = w[i] * 6 * t[i] * (1 - t[i]);
         }
+        lock (Gate) Clustered[order] = (u, wu);
         return (u, wu);
     }
 }

@@ -15,7 +15,7 @@ namespace Helipol.Engine.Kernel;
 /// (a_p² + a_q²)/2, which is the wire's own radius on one wire and keeps the matrix symmetric where
 /// wires of different radius meet.
 ///
-/// Near pairs (closer than half the longer segment) split g into the static 1/R part, integrated over v in
+/// Near pairs (closer than the longer segment) split g into the static 1/R part, integrated over v in
 /// closed form (asinh, <see cref="StaticLineIntegrals"/>), and the smooth remainder (e^{−jkR} − 1)/R,
 /// integrated by Gauss–Legendre; the outer integral uses end-clustered nodes. Farther pairs use plain
 /// Gauss–Legendre whose order on each segment falls with its length over the distance (4, 3, then 2 points).
@@ -27,13 +27,15 @@ internal sealed class InteractionTable
     private readonly List<double> _tangentDot = new();
     private readonly List<double> _s00 = new(), _s10 = new(), _s01 = new(), _s11 = new();
     private readonly List<int> _start = new(), _count = new();
-    private readonly List<double> _r = new(), _w = new(), _wu = new(), _wv = new(), _wuv = new();
+    private double[] _r = new double[1024], _w = new double[1024], _wu = new double[1024], _wv = new double[1024], _wuv = new double[1024];
+    private int _points;
 
     // Frozen arrays for the hot loop.
     internal int[] P = [], Q = [], Start = [], Count = [];
     internal bool[] Image = [], Subtracted = [];
     internal double[] TangentDot = [], S00 = [], S10 = [], S01 = [], S11 = [];
     internal double[] R = [], W = [], WU = [], WV = [], WUV = [];
+    internal double[] InverseR = [], StaticOffset = [];
 
     public int PairCount => P.Length;
 
@@ -76,20 +78,24 @@ internal sealed class InteractionTable
         Vector3 q0 = image ? sq.Start.MirroredInGround : sq.Start;
         Vector3 q1 = image ? sq.End.MirroredInGround : sq.End;
         double lmax = Math.Max(sp.LengthM, sq.LengthM);
-        double dmin = Geometry3.SegmentDistance(sp.Start, sp.End, q0, q1);
-        if (dmin < 0.5 * lmax)
+        Vector3 qc = 0.5 * (q0 + q1);
+        double bound = Vector3.Distance(sp.Centre, qc) - 0.5 * (sp.LengthM + sq.LengthM);
+        // Far beyond every threshold below: the exact distance cannot change the rule.
+        double dmin = bound >= 3 * lmax ? bound : Geometry3.SegmentDistance(sp.Start, sp.End, q0, q1);
+        if (dmin < lmax)
             Add(segs, p, q, image, GaussLegendre.EndClustered(dmin < 0.1 * lmax ? 12 : 8), GaussLegendre.OnUnitInterval(4), true);
         else
             Add(segs, p, q, image, GaussLegendre.OnUnitInterval(FarOrder(sp.LengthM, dmin)), GaussLegendre.OnUnitInterval(FarOrder(sq.LengthM, dmin)), false);
     }
 
     /// <summary>
-    /// Gauss–Legendre points along a segment of length L seen from distance d. An n-point rule
-    /// integrates 1/R over the segment with a relative error of order (L/2d)^(2n) (the error term of
-    /// Gauss–Legendre, Abramowitz and Stegun 25.4.30), so 2 points reach about 1e-3 at d = 2L.
+    /// Gauss–Legendre points along a segment of length L seen from distance d ≥ L (nearer pairs are
+    /// singularity-subtracted). An n-point rule integrates 1/R over the segment with a relative error of
+    /// order (L/2d)^(2n) (the error term of Gauss–Legendre, Abramowitz and Stegun 25.4.30): at most
+    /// about 4e-3 for 4 points at d = L, 1.4e-3 for 3 at 1.5 L and 8e-4 for 2 at 3 L.
     /// </summary>
     internal static int FarOrder(double lengthM, double distanceM) =>
-        distanceM >= 2 * lengthM ? 2 : distanceM >= lengthM ? 3 : 4;
+        distanceM >= 3 * lengthM ? 2 : distanceM >= 1.5 * lengthM ? 3 : 4;
 
     private void Add(Segment[] segs, int p, int q, bool image,
         (double[] Nodes, double[] Weights) outer, (double[] Nodes, double[] Weights) inner, bool subtract)
@@ -102,7 +108,10 @@ internal sealed class InteractionTable
 
         _p.Add(p); _q.Add(q); _image.Add(image); _subtracted.Add(subtract);
         _tangentDot.Add(Vector3.Dot(sp.Direction, tq));
-        _start.Add(_r.Count);
+        _start.Add(_points);
+        int needed = _points + outer.Nodes.Length * inner.Nodes.Length;
+        if (needed > _r.Length) Grow(Math.Max(needed, 2 * _r.Length));
+        double lq = sq.LengthM;
         double s00 = 0, s10 = 0, s01 = 0, s11 = 0;
         for (int i = 0; i < outer.Nodes.Length; i++)
         {
@@ -110,19 +119,26 @@ internal sealed class InteractionTable
             Vector3 r = sp.PointAt(u);
             if (subtract)
             {
-                var (c0, c1) = StaticLineIntegrals.Over(r, q0, tq, sq.LengthM, a2);
+                var (c0, c1) = StaticLineIntegrals.Over(r, q0, tq, lq, a2);
                 s00 += wi * c0; s10 += wi * u * c0; s01 += wi * c1; s11 += wi * u * c1;
             }
             for (int j = 0; j < inner.Nodes.Length; j++)
             {
                 double v = inner.Nodes[j], w = wi * inner.Weights[j];
-                Vector3 rq = q0 + (v * sq.LengthM) * tq;
+                Vector3 rq = q0 + (v * lq) * tq;
                 double dist = Math.Sqrt((r - rq).LengthSquared + a2);
-                _r.Add(dist); _w.Add(w); _wu.Add(w * u); _wv.Add(w * v); _wuv.Add(w * u * v);
+                _r[_points] = dist; _w[_points] = w; _wu[_points] = w * u; _wv[_points] = w * v; _wuv[_points] = w * u * v;
+                _points++;
             }
         }
-        _count.Add(_r.Count - _start[^1]);
+        _count.Add(_points - _start[^1]);
         _s00.Add(s00); _s10.Add(s10); _s01.Add(s01); _s11.Add(s11);
+    }
+
+    private void Grow(int size)
+    {
+        Array.Resize(ref _r, size); Array.Resize(ref _w, size); Array.Resize(ref _wu, size);
+        Array.Resize(ref _wv, size); Array.Resize(ref _wuv, size);
     }
 
     private void Freeze()
@@ -130,10 +146,52 @@ internal sealed class InteractionTable
         P = _p.ToArray(); Q = _q.ToArray(); Image = _image.ToArray(); Subtracted = _subtracted.ToArray();
         TangentDot = _tangentDot.ToArray(); Start = _start.ToArray(); Count = _count.ToArray();
         S00 = _s00.ToArray(); S10 = _s10.ToArray(); S01 = _s01.ToArray(); S11 = _s11.ToArray();
-        R = _r.ToArray(); W = _w.ToArray(); WU = _wu.ToArray(); WV = _wv.ToArray(); WUV = _wuv.ToArray();
+        R = _r[.._points]; W = _w[.._points]; WU = _wu[.._points]; WV = _wv[.._points]; WUV = _wuv[.._points];
+        InverseR = new double[_points];
+        for (int i = 0; i < _points; i++) InverseR[i] = 1 / R[i];
+        StaticOffset = new double[R.Length];
+        for (int e = 0; e < P.Length; e++)
+            if (Subtracted[e]) Array.Fill(StaticOffset, 1.0, Start[e], Count[e]);
     }
 
-    /// <summary>The four kernel moments of pair <paramref name="e"/> at wavenumber k (rad/m).</summary>
+    public int PointCount => R.Length;
+
+    /// <summary>
+    /// Kernel value at every quadrature point at wavenumber k: g = (e^{−jkR} − s)/R with s = 1 where the
+    /// static part was taken out. Scalar Math.SinCos on purpose: the SIMD sine and cosine of the runtime
+    /// may fuse multiply-adds differently before and after the JIT re-optimizes a method, which made two
+    /// solves of the same frequency differ in the last bits; results here must be bit-reproducible.
+    /// </summary>
+    public void KernelValues(double k, Span<double> real, Span<double> imaginary)
+    {
+        int n = R.Length, i = 0;
+        for (; i < n; i++)
+        {
+            var (sin, cos) = Math.SinCos(k * R[i]);
+            real[i] = (cos - StaticOffset[i]) * InverseR[i];
+            imaginary[i] = -sin * InverseR[i];
+        }
+    }
+
+    /// <summary>The four kernel moments of pair <paramref name="e"/> from precomputed kernel values.</summary>
+    public void Moments(int e, ReadOnlySpan<double> gr, ReadOnlySpan<double> gi, out Complex i00, out Complex i10, out Complex i01, out Complex i11)
+    {
+        double r00 = 0, x00 = 0, r10 = 0, x10 = 0, r01 = 0, x01 = 0, r11 = 0, x11 = 0;
+        int end = Start[e] + Count[e];
+        double[] w = W, wu = WU, wv = WV, wuv = WUV;
+        for (int i = Start[e]; i < end; i++)
+        {
+            double a = gr[i], b = gi[i];
+            r00 += w[i] * a; x00 += w[i] * b;
+            r10 += wu[i] * a; x10 += wu[i] * b;
+            r01 += wv[i] * a; x01 += wv[i] * b;
+            r11 += wuv[i] * a; x11 += wuv[i] * b;
+        }
+        if (Subtracted[e]) { r00 += S00[e]; r10 += S10[e]; r01 += S01[e]; r11 += S11[e]; }
+        i00 = new Complex(r00, x00); i10 = new Complex(r10, x10); i01 = new Complex(r01, x01); i11 = new Complex(r11, x11);
+    }
+
+    /// <summary>The four kernel moments of pair <paramref name="e"/> at wavenumber k (rad/m), plain scalar reference.</summary>
     public void Moments(int e, double k, out Complex i00, out Complex i10, out Complex i01, out Complex i11)
     {
         double r00 = 0, x00 = 0, r10 = 0, x10 = 0, r01 = 0, x01 = 0, r11 = 0, x11 = 0;

@@ -1,8 +1,15 @@
 namespace Helipol.Engine.Mesh;
 
-/// <summary>Small geometric helpers for segments.</summary>
+/// <summary>Distances between segments.</summary>
 internal static class Geometry3
 {
+    /// <summary>
+    /// A cheap lower bound on the distance between two segments: centre distance minus both half
+    /// lengths. Lets callers skip the exact distance for pairs that are clearly far apart.
+    /// </summary>
+    public static double DistanceLowerBound(Segment p, Segment q) =>
+        Vector3.Distance(p.Centre, q.Centre) - 0.5 * (p.LengthM + q.LengthM);
+
     /// <summary>Shortest distance between segments [p0,p1] and [q0,q1] (clamped closest-point method).</summary>
     public static double SegmentDistance(Vector3 p0, Vector3 p1, Vector3 q0, Vector3 q1)
     {

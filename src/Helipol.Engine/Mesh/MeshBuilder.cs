@@ -28,6 +28,10 @@ internal static class MeshBuilder
             throw new ModelException(F($"frequency: found {maxFrequencyHz} Hz, allowed a finite value > 0"));
         if (!(options.SegmentsPerWavelength >= 1 && double.IsFinite(options.SegmentsPerWavelength)))
             throw new ModelException(F($"segmentation: found {options.SegmentsPerWavelength} segments per wavelength, allowed ≥ 1"));
+        if (options.MinimumSegmentsPerWire < 1)
+            throw new ModelException(F($"segmentation: found {options.MinimumSegmentsPerWire} minimum segments per wire, allowed ≥ 1"));
+        if (!(double.IsFinite(options.MinimumLengthInRadii) && options.MinimumLengthInRadii > 0))
+            throw new ModelException(F($"segmentation: found {options.MinimumLengthInRadii} minimum segment length in radii, allowed a finite value > 0"));
         if (model.Wires is null || model.Wires.Count == 0) throw new ModelException("wires: none given, allowed one or more");
         if (model.Sources is null || model.Sources.Count == 0) throw new ModelException("sources: none given, allowed one or more voltage sources");
 
@@ -184,6 +188,7 @@ internal static class MeshBuilder
                 var sq = segs[q];
                 if (sp.StartNode == sq.StartNode || sp.StartNode == sq.EndNode || sp.EndNode == sq.StartNode || sp.EndNode == sq.EndNode)
                     continue;
+                if (Geometry3.DistanceLowerBound(sp, sq) >= sp.RadiusM + sq.RadiusM) continue;
                 double d = Geometry3.SegmentDistance(sp.Start, sp.End, sq.Start, sq.End);
                 if (d < sp.RadiusM + sq.RadiusM)
                     throw new ModelException(F($"wires[{sp.WireIndex}] and wires[{sq.WireIndex}]: found surfaces touching or crossing near {sp.Centre} (axes {d * 1e3:0.###} mm apart), allowed at least the sum of radii ({(sp.RadiusM + sq.RadiusM) * 1e3:0.###} mm) unless joined at a shared point"));
@@ -258,7 +263,7 @@ internal static class MeshBuilder
         {
             1 => nodeBases[best][0],
             0 => throw new ModelException(F($"{field}: found the free wire end {nodes[best]}, allowed a node between two segments or a wire end on the ground")),
-            _ => throw new ModelException(F($"{field}: found a junction of {nodeBases[best].Count + 1} wire ends at {nodes[best]}, allowed a node between two segments")),
+            _ => throw new ModelException(F($"{field}: found a junction of several wire ends at {nodes[best]}, allowed a node between two segments or a single wire end on the ground")),
         };
     }
 

@@ -62,6 +62,9 @@ public sealed class MomSolution
     /// <summary>Frequency of this solution, Hz.</summary>
     public double FrequencyHz { get; }
 
+    /// <summary>Number of voltage sources, in the order of <see cref="WireModel.Sources"/>.</summary>
+    public int SourceCount => _mesh.SourceBases.Length;
+
     /// <summary>Current through source <paramref name="sourceIndex"/> in its reference direction, A.</summary>
     public Complex InputCurrentA(int sourceIndex = 0) => _basisCurrents[SourceBasis(sourceIndex)];
 
@@ -96,7 +99,12 @@ public sealed class MomSolution
     }
 
     /// <summary>Far field r·E (volts) in direction (θ, φ); zero below a perfect ground.</summary>
-    public FarField FarFieldAt(double thetaRad, double phiRad) => _radiators.At(thetaRad, phiRad);
+    public FarField FarFieldAt(double thetaRad, double phiRad)
+    {
+        if (!double.IsFinite(thetaRad) || !double.IsFinite(phiRad))
+            throw new ArgumentOutOfRangeException(nameof(thetaRad), FormattableString.Invariant($"direction: found θ = {thetaRad}, φ = {phiRad} rad, allowed finite angles"));
+        return _radiators.At(thetaRad, phiRad);
+    }
 
     /// <summary>Directivity 4πU/P_rad (ratio, not dB).</summary>
     public double DirectivityAt(double thetaRad, double phiRad)

@@ -10,7 +10,7 @@ internal sealed class MathNetLuSolver : ILinearSolver
 
     public void Solve(Complex[] matrix, int n, Complex[] rhs, Complex[] solution)
     {
-        var z = Matrix<Complex>.Build.Dense(n, n, matrix);
+        var z = Matrix<Complex>.Build.Dense(n, n, matrix.Length == n * n ? matrix : matrix[..(n * n)]);
         var x = z.LU().Solve(Vector<Complex>.Build.Dense(rhs));
         for (int i = 0; i < n; i++) solution[i] = x[i];
     }

@@ -41,6 +41,17 @@ public class LossTests
         Assert.InRange(Loss(100) / Loss(1), 10 * 0.97, 10 * 1.03);
     }
 
+    // Surface resistance of copper at 1 GHz, R_s = sqrt(ωμ0/2σ) ≈ 8.2 mΩ (Pozar, Microwave Engineering,
+    // surface resistance of good conductors; figure from memory), spread round a 1 mm radius wire:
+    // R' = R_s/(2πa) ≈ 1.31 Ω/m, with an equal internal reactance (good-conductor surface impedance).
+    [Fact]
+    public void CopperSurfaceImpedanceMatchesHandbook()
+    {
+        var perMetre = Helipol.Engine.Mesh.WireImpedance.For(1e-3, new LossyConductor(5.8e7), null).PerMetreOhm(2 * Math.PI * 1e9);
+        Assert.Equal(8.2e-3 / (2 * Math.PI * 1e-3), perMetre.Real, 0.01);
+        Assert.Equal(perMetre.Real, perMetre.Imaginary, 12);
+    }
+
     // Circuit theory: a lumped series impedance at the feed node of a dipole adds to its input impedance
     // exactly (the load and the gap are in series at the same node).
     [Fact]
@@ -65,7 +76,9 @@ public class LossTests
     {
         const double a = 1e-3;
         var coat = new DielectricCoating(3, 2 * a);
-        Assert.Equal(9.2420e-8, 2e-7 * (2.0 / 3) * Math.Log(2), 11);
+        var perMetre = Helipol.Engine.Mesh.WireImpedance.For(a, PerfectConductor.Instance, coat);
+        Assert.Equal(9.2420e-8, perMetre.CoatingInductanceHPerM, 11);
+        Assert.Equal(0.5 * 9.2420e-8, Helipol.Engine.Mesh.WireImpedance.For(a, PerfectConductor.Instance, coat with { InductanceScale = 0.5 }).CoatingInductanceHPerM, 11);
         double bare = ResonantFrequency(null), coated = ResonantFrequency(coat);
         double l0 = 2e-7 * (Math.Log(0.48 / a) - 1), lc = 2e-7 * (2.0 / 3) * Math.Log(2);
         double expectedShift = 1 - Math.Sqrt(l0 / (l0 + lc));

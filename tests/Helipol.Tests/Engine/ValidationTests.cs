@@ -51,6 +51,13 @@ public class ValidationTests
         Assert.Contains("free wire end", Refusal(new WireModel(new[] { Good }, GroundPlane.None, new[] { new VoltageSource(new Vector3(0, 0, 0.25), 1) })));
 
     [Fact]
+    public void RefusesSourceAtAJunction()
+    {
+        var branch = Wire.Straight(new Vector3(0, 0, 0), new Vector3(0.2, 0, 0.1), 1e-3);
+        Assert.Contains("junction", Refusal(With(Good, branch)));
+    }
+
+    [Fact]
     public void RefusesWireBelowGround() =>
         Assert.Contains("below the ground", Refusal(Antennas.Dipole(0.5, 1e-3) with { Ground = GroundPlane.PerfectAtZ0 }));
 
@@ -73,4 +80,16 @@ public class ValidationTests
     [Fact]
     public void RefusesWireTooThickForTheFrequency() =>
         Assert.Contains("too thick", Refusal(Antennas.Dipole(3, 0.05), 3e8));
+}
+
+public class ResultGuardTests
+{
+    // NaN never leaves the engine: a non-finite direction is refused rather than answered with NaN.
+    [Fact]
+    public void RefusesNonFiniteDirection()
+    {
+        var s = Antennas.Solve(Antennas.Dipole(0.5, 1e-3));
+        Assert.Throws<ArgumentOutOfRangeException>(() => s.GainAt(double.NaN, 0));
+        Assert.Throws<ArgumentOutOfRangeException>(() => s.FarFieldAt(0, double.PositiveInfinity));
+    }
 }
