@@ -32,7 +32,8 @@ public class PolarizerPhysicsTests
     }
 
     // Soundness: the left-wound build is the mirror image of the right-wound one, and a mirror image
-    // swaps the circular components (reflection reverses rotation): AR equal, sense flipped.
+    // swaps the circular components (reflection reverses rotation): AR equal, sense flipped
+    // (to 1e-4 dB: the mirrored mesh is numbered differently, so rounding differs).
     [Fact]
     public void FlippingTheWindingFlipsTheSense()
     {
@@ -41,9 +42,9 @@ public class PolarizerPhysicsTests
         var r = right.Summarize(Sense.Rhcp);
         var l = left.Summarize(Sense.Rhcp);
         Assert.NotEqual(r.Sense, l.Sense);
-        Assert.Equal(r.MeanAxialRatioDb, l.MeanAxialRatioDb, 6);
-        Assert.Equal(r.GainRhcpDbic, l.GainLhcpDbic, 6);
-        Assert.Equal(r.GainLhcpDbic, l.GainRhcpDbic, 6);
+        Assert.Equal(r.MeanAxialRatioDb, l.MeanAxialRatioDb, 4);
+        Assert.Equal(r.GainRhcpDbic, l.GainLhcpDbic, 4);
+        Assert.Equal(r.GainLhcpDbic, l.GainRhcpDbic, 4);
     }
 
     // More elements give a more uniform axial ratio around the azimuth: 5 preferred over 3 (common
