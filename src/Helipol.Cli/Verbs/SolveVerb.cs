@@ -10,7 +10,8 @@ namespace Helipol.Cli.Verbs;
 /// <summary>
 /// <c>helipol solve FILE [--json]</c>: searches element length and rise (and count and diameter
 /// when auto) with the field model and shows them beside the practice-scaling values. --json
-/// prints design.json with the solved values, the sweep, the tolerance analysis and the practice column.
+/// prints design.json with the solved values, the sweep, the tolerance analysis and the practice column;
+/// --map writes the search's axial-ratio map as a PNG heat map.
 /// </summary>
 public static class SolveVerb
 {
@@ -18,7 +19,8 @@ public static class SolveVerb
     {
         var file = new Argument<string>("FILE") { Description = "design file (.yaml)" };
         var json = new Option<bool>("--json") { Description = "print design.json with the solved values, sweep, tolerance and practice column" };
-        var command = new Command("solve", "Solve element length and rise with the field model; show them beside practice scaling.") { file, json };
+        var map = new Option<string>("--map") { Description = "also write the axial-ratio map of the search as a PNG heat map to this file" };
+        var command = new Command("solve", "Solve element length and rise with the field model; show them beside practice scaling.") { file, json, map };
         command.SetAction(parse =>
         {
             var designs = DesignLoader.LoadAll(new[] { parse.GetValue(file)! }, console);
@@ -35,6 +37,8 @@ public static class SolveVerb
                 console.Error.WriteLine($"{design.SourceFile}: polarizer: found {ex.Message}, allowed a search range with buildable geometry (widen solve.search or the former)");
                 return ExitCodes.BadInput;
             }
+            if (parse.GetValue(map) is { } mapFile)
+                Helipol.Emit.AtomicFile.WriteAllBytes(mapFile, ReportPlots.AxialRatioMap(solved.Search.Map, solved.Layout.LengthM, solved.Layout.RiseM, design.Name));
             if (parse.GetValue(json))
             {
                 var sweep = BandSweep.Run(design, solved.Build, counter: counter);

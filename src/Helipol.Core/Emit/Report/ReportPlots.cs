@@ -81,7 +81,7 @@ public static class ReportPlots
     {
         var plt = new Plot();
         double peak = Math.Max(cut.GainRhcpDbic.Max(), cut.GainLhcpDbic.Max());
-        double top = Math.Ceiling(peak / 5) * 5, floor = top - 30;
+        double top = Math.Ceiling(peak / 5) * 5 + 0.0, floor = top - 30; // + 0.0 turns −0 into 0 for the label
         var axis = plt.Add.PolarAxis(30);
         axis.SetCircles(30, 6);
         axis.SetSpokes(12, 33, true);
@@ -97,10 +97,11 @@ public static class ReportPlots
         l.MarkerSize = 0;
         l.LineWidth = 2;
         l.Color = Colors.Blue;
-        plt.Title(FormattableString.Invariant($"{title}; outer ring {top:0} dBic, 5 dB per ring"));
         plt.ShowLegend(Alignment.UpperRight);
         plt.Axes.Frameless();
         plt.HideGrid();
+        // A frameless plot has no title panel: the title goes in as an annotation.
+        plt.Add.Annotation(FormattableString.Invariant($"{title}; outer ring {top:0} dBic, 5 dB per ring"), Alignment.UpperLeft);
         return plt.GetImageBytes(PolarSize, PolarSize, ImageFormat.Png);
     }
 
