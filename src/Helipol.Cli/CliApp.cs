@@ -40,6 +40,12 @@ public static class CliApp
         {
             return parsed.Invoke(new InvocationConfiguration { Output = output, Error = error, EnableDefaultExceptionHandler = false });
         }
+        catch (Helipol.Design.CalibrationException ex)
+        {
+            // A design's calibration file is input too: one line, exit 2, nothing written.
+            error.WriteLine(ex.Message);
+            return ExitCodes.BadInput;
+        }
         catch (Exception ex) when (ex is IOException or UnauthorizedAccessException)
         {
             error.WriteLine($"helipol: {ex.Message}");

@@ -96,4 +96,19 @@ public class DesignVerbTests
         var ex = Assert.Throws<CalibrationException>(() => CalibrationFile.Read(bad, "bad.yaml"));
         Assert.Equal("bad.yaml:2:17: loading_factor: found 'lots', allowed a number from 0 to 1000", ex.Message);
     }
+
+    [Fact]
+    public void ABadCalibrationFileReferencedByADesignIsBadInput()
+    {
+        var folder = TestPaths.NewTempFolder();
+        Directory.CreateDirectory(Path.Combine(folder, "cal"));
+        File.WriteAllText(Path.Combine(folder, "cal", "bad.yaml"), "loading_factor: -2\n");
+        var text = File.ReadAllText(Path.Combine(TestPaths.Data, "designs", "practice-foam-tape.yaml"))
+            .Replace("  sense: rhcp\n", "  sense: rhcp\n  winding: left\n") + "calibration: cal/bad.yaml\n";
+        var design = Path.Combine(folder, "d.yaml");
+        File.WriteAllText(design, text);
+        var run = CliRun.Of("analyze", design, "--freq", "5.8GHz");
+        Assert.Equal(2, run.ExitCode);
+        Assert.EndsWith("bad.yaml:1:17: loading_factor: found '-2', allowed a number from 0 to 1000", run.FirstErrorLine);
+    }
 }

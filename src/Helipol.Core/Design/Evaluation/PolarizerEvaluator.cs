@@ -33,9 +33,7 @@ public static class PolarizerEvaluator
     private static IReadOnlyList<CircularSamples> SampleMesh(MeshedModel mesh, IReadOnlyList<double> frequenciesHz, ObservationSet directions,
         FieldSolveCounter? counter, int? maxParallelism)
     {
-        IReadOnlyList<MomSolution> solutions = maxParallelism == 1
-            ? frequenciesHz.Select(f => MomSolver.Solve(mesh, f)).ToArray()
-            : MomSolver.Sweep(mesh, frequenciesHz, maxParallelism);
+        var solutions = MomSolver.Sweep(mesh, frequenciesHz, maxParallelism);
         counter?.Add(frequenciesHz.Count);
         var result = new CircularSamples[solutions.Count];
         if (maxParallelism == 1 || solutions.Count == 1)
