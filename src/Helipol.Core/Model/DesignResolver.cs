@@ -129,7 +129,6 @@ public static class DesignResolver
             errors.Add(doc.MarkOf(at), at, $"from {QuantityKind.Angle.FormatSi(from)} to {QuantityKind.Angle.FormatSi(to)}", "solve.elevations.from below solve.elevations.to");
         }
 
-        var practice = polarizer.PracticeLayout(band.CenterHz);
         var lengthRange = doc.Find("solve.search.element_length") as PairValue;
         var riseRange = doc.Find("solve.search.element_rise") as PairValue;
         var diameterRange = doc.Find("solve.search.outer_diameter") as PairValue;
@@ -145,7 +144,6 @@ public static class DesignResolver
             Low(diameterRange) ?? Math.Max(0.7 * practiceDiameter, polarizer.Former.BoreM + 2 * polarizer.MinimumWallM),
             High(diameterRange) ?? Math.Max(1.4 * practiceDiameter, polarizer.Former.BoreM + 4 * polarizer.MinimumWallM),
             doc.Integer("solve.search.grid"));
-        _ = practice;
 
         return new SolveOptions(
             doc.Choice("solve.objective") == "mean-ar" ? Objective.MeanAxialRatio : Objective.WorstAxialRatio,

@@ -20,6 +20,7 @@ public sealed record YamlScalar(SourceMark Mark, string Value, bool IsPlain) : Y
     /// <summary>A user's key as it may appear in a field path: one line, at most 40 characters.</summary>
     internal static string KeyText(string key)
     {
+        if (string.IsNullOrWhiteSpace(key)) return "(empty key)";
         var oneLine = key.Replace("\r", "\\r").Replace("\n", "\\n");
         return oneLine.Length <= 40 ? oneLine : oneLine[..37] + "...";
     }

@@ -24,13 +24,12 @@ public static partial class YamlTreeBuilder
         {
             parser.Consume<StreamStart>();
             if (parser.TryConsume<StreamEnd>(out _)) return null;
-            var documentStart = parser.Consume<DocumentStart>();
+            parser.Consume<DocumentStart>();
             var root = ReadNode(parser, shownAs, "", 0, duplicates);
             parser.Consume<DocumentEnd>();
             if (parser.Current is DocumentStart second)
                 throw Error(shownAs, second.Start, SpecError.WholeFile, "a second YAML document", "one document per design file");
             parser.Consume<StreamEnd>();
-            _ = documentStart;
             return root;
         }
         catch (YamlException ex)

@@ -45,7 +45,10 @@ public sealed class MappingField : FieldType
             var field = Fields.FirstOrDefault(f => f.Name == key.Value);
             if (field is null)
             {
-                Fail(context, key, keyPath, $"unknown key '{YamlScalar.KeyText(key.Value)}'", $"{KeyList}{Hint(key.Value, path)}");
+                if (string.IsNullOrWhiteSpace(key.Value))
+                    Fail(context, value, keyPath, "a value with an empty key", KeyList); // the value is where the user looks
+                else
+                    Fail(context, key, keyPath, $"unknown key '{YamlScalar.KeyText(key.Value)}'", $"{KeyList}{Hint(key.Value, path)}");
                 continue;
             }
             given.Add(field.Name);
