@@ -121,6 +121,22 @@ public static class Program
         Console.WriteLine("|---:|---:|---:|");
         foreach (var (w, t) in times) Console.WriteLine(string.Create(Inv, $"| {w} | {t:F1} | {t / freqs.Length:F3} |"));
         Console.WriteLine(string.Create(Inv, $"speed-up 1 → 2 workers: {times[1] / times[2]:F2}x (ideal 2.00 on an idle 2-core machine)"));
+        // Control: the same 1-vs-2 comparison on a plain arithmetic loop shows how much parallelism the
+        // machine actually gives right now, independent of the engine.
+        static void Spin(int _)
+        {
+            double a = 0;
+            for (int i = 0; i < 1_000_000; i++) a += Math.Sqrt(i + a * 1e-9);
+            GC.KeepAlive(a);
+        }
+        double Control(int workers)
+        {
+            var sw = Stopwatch.StartNew();
+            Parallel.For(0, 40, new ParallelOptions { MaxDegreeOfParallelism = workers }, Spin);
+            return sw.Elapsed.TotalMilliseconds;
+        }
+        Control(2);
+        Console.WriteLine(string.Create(Inv, $"control, plain arithmetic loop: speed-up 1 → 2 workers {Control(1) / Control(2):F2}x (the machine's available parallelism at this moment)"));
     }
 
     private static double Median(int repetitions, Action timed) => Median(repetitions, () => { }, timed);

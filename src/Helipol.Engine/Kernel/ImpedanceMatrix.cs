@@ -15,8 +15,6 @@ namespace Helipol.Engine.Kernel;
 /// </summary>
 internal static class ImpedanceMatrix
 {
-    [ThreadStatic] private static double[]? _real, _imaginary;
-
     public static void Fill(MeshedModel mesh, InteractionTable table, bool mirrored, double k, Complex[] z)
     {
         int n = mesh.UnknownCount;
@@ -27,20 +25,10 @@ internal static class ImpedanceMatrix
         double eta = PhysicalConstants.Eta0;
         // jη/(4π) is common to both the vector- and the scalar-potential terms.
         double c = eta / (4 * Math.PI);
-        // Per-thread scratch for the kernel values: reused across frequencies, so a sweep allocates
-        // nothing here after its first frequency.
-        if (_real is null || _real.Length < table.PointCount)
-        {
-            _real = new double[table.PointCount];
-            _imaginary = new double[table.PointCount];
-        }
-        var gr = _real.AsSpan(0, table.PointCount);
-        var gi = _imaginary!.AsSpan(0, table.PointCount);
-        table.KernelValues(k, gr, gi);
         for (int e = 0; e < table.PairCount; e++)
         {
             int p = table.P[e], q = table.Q[e];
-            table.Moments(e, gr, gi, out var i00, out var i10, out var i01, out var i11);
+            table.Moments(e, k, out var i00, out var i10, out var i01, out var i11);
             double sign = table.Image[e] ? -1.0 : 1.0;
             double vec = k * segs[p].LengthM * segs[q].LengthM * table.TangentDot[e];
             double sca = 1.0 / k;

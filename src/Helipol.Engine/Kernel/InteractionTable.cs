@@ -19,25 +19,30 @@ namespace Helipol.Engine.Kernel;
 /// closed form (asinh, <see cref="StaticLineIntegrals"/>), and the smooth remainder (e^{−jkR} − 1)/R,
 /// integrated by Gauss–Legendre; the outer integral uses end-clustered nodes. Farther pairs use plain
 /// Gauss–Legendre whose order on each segment falls with its length over the distance (4, 3, then 2 points).
+/// Weights come from a few shared <see cref="QuadratureRule"/>s; per point only R is stored, which keeps
+/// the table small enough to stay in cache while a frequency is filled.
 /// </summary>
 internal sealed class InteractionTable
 {
-    private readonly List<int> _p = new(), _q = new();
+    private readonly List<int> _p = new(), _q = new(), _rule = new(), _start = new();
     private readonly List<bool> _image = new(), _subtracted = new();
     private readonly List<double> _tangentDot = new();
     private readonly List<double> _s00 = new(), _s10 = new(), _s01 = new(), _s11 = new();
-    private readonly List<int> _start = new(), _count = new();
-    private double[] _r = new double[1024], _w = new double[1024], _wu = new double[1024], _wv = new double[1024], _wuv = new double[1024];
+    private readonly List<QuadratureRule> _rules = new();
+    private readonly Dictionary<(int, int, bool), int> _ruleIndex = new();
+    private double[] _r = new double[4096];
     private int _points;
 
     // Frozen arrays for the hot loop.
-    internal int[] P = [], Q = [], Start = [], Count = [];
+    internal int[] P = [], Q = [], Start = [], Rule = [];
     internal bool[] Image = [], Subtracted = [];
     internal double[] TangentDot = [], S00 = [], S10 = [], S01 = [], S11 = [];
-    internal double[] R = [], W = [], WU = [], WV = [], WUV = [];
-    internal double[] InverseR = [], StaticOffset = [];
+    internal double[] R = [];
+    internal QuadratureRule[] Rules = [];
 
     public int PairCount => P.Length;
+
+    public int PointCount => R.Length;
 
     /// <summary>Adaptive table over pairs p ≤ q (the kernel is reciprocal; the fill mirrors the rest).</summary>
     public static InteractionTable BuildAdaptive(Segment[] segs, bool ground)
@@ -60,16 +65,25 @@ internal sealed class InteractionTable
     public static InteractionTable BuildReference(Segment[] segs, bool ground)
     {
         var t = new InteractionTable();
-        var outer = GaussLegendre.EndClustered(16);
-        var inner = GaussLegendre.OnUnitInterval(8);
+        int rule = t.RuleFor(16, 8, true);
         for (int p = 0; p < segs.Length; p++)
             for (int q = 0; q < segs.Length; q++)
             {
-                t.Add(segs, p, q, false, outer, inner, true);
-                if (ground) t.Add(segs, p, q, true, outer, inner, true);
+                t.Add(segs, p, q, false, rule, true);
+                if (ground) t.Add(segs, p, q, true, rule, true);
             }
         t.Freeze();
         return t;
+    }
+
+    private int RuleFor(int outerOrder, int innerOrder, bool nearPair)
+    {
+        var key = (outerOrder, innerOrder, nearPair);
+        if (_ruleIndex.TryGetValue(key, out int index)) return index;
+        var outer = nearPair ? GaussLegendre.EndClustered(outerOrder) : GaussLegendre.OnUnitInterval(outerOrder);
+        _rules.Add(new QuadratureRule(outer, GaussLegendre.OnUnitInterval(innerOrder)));
+        _ruleIndex[key] = _rules.Count - 1;
+        return _rules.Count - 1;
     }
 
     private void AddAdaptive(Segment[] segs, int p, int q, bool image)
@@ -83,9 +97,9 @@ internal sealed class InteractionTable
         // Far beyond every threshold below: the exact distance cannot change the rule.
         double dmin = bound >= 3 * lmax ? bound : Geometry3.SegmentDistance(sp.Start, sp.End, q0, q1);
         if (dmin < lmax)
-            Add(segs, p, q, image, GaussLegendre.EndClustered(dmin < 0.1 * lmax ? 12 : 8), GaussLegendre.OnUnitInterval(4), true);
+            Add(segs, p, q, image, RuleFor(dmin < 0.1 * lmax ? 12 : 8, 4, true), true);
         else
-            Add(segs, p, q, image, GaussLegendre.OnUnitInterval(FarOrder(sp.LengthM, dmin)), GaussLegendre.OnUnitInterval(FarOrder(sq.LengthM, dmin)), false);
+            Add(segs, p, q, image, RuleFor(FarOrder(sp.LengthM, dmin), FarOrder(sq.LengthM, dmin), false), false);
     }
 
     /// <summary>
@@ -97,120 +111,76 @@ internal sealed class InteractionTable
     internal static int FarOrder(double lengthM, double distanceM) =>
         distanceM >= 3 * lengthM ? 2 : distanceM >= 1.5 * lengthM ? 3 : 4;
 
-    private void Add(Segment[] segs, int p, int q, bool image,
-        (double[] Nodes, double[] Weights) outer, (double[] Nodes, double[] Weights) inner, bool subtract)
+    private void Add(Segment[] segs, int p, int q, bool image, int ruleIndex, bool subtract)
     {
+        var rule = _rules[ruleIndex];
         Segment sp = segs[p], sq = segs[q];
         Vector3 q0 = image ? sq.Start.MirroredInGround : sq.Start;
         Vector3 q1 = image ? sq.End.MirroredInGround : sq.End;
-        Vector3 tq = (1.0 / sq.LengthM) * (q1 - q0);
+        double lq = sq.LengthM;
+        Vector3 tq = (1.0 / lq) * (q1 - q0);
         double a2 = 0.5 * (sp.RadiusM * sp.RadiusM + sq.RadiusM * sq.RadiusM);
 
-        _p.Add(p); _q.Add(q); _image.Add(image); _subtracted.Add(subtract);
+        _p.Add(p); _q.Add(q); _image.Add(image); _subtracted.Add(subtract); _rule.Add(ruleIndex);
         _tangentDot.Add(Vector3.Dot(sp.Direction, tq));
         _start.Add(_points);
-        int needed = _points + outer.Nodes.Length * inner.Nodes.Length;
-        if (needed > _r.Length) Grow(Math.Max(needed, 2 * _r.Length));
-        double lq = sq.LengthM;
+        if (_points + rule.PointCount > _r.Length) Array.Resize(ref _r, Math.Max(_points + rule.PointCount, 2 * _r.Length));
+        var (outerNodes, outerWeights) = rule.Outer;
+        var innerNodes = rule.Inner.Nodes;
         double s00 = 0, s10 = 0, s01 = 0, s11 = 0;
-        for (int i = 0; i < outer.Nodes.Length; i++)
+        for (int i = 0; i < outerNodes.Length; i++)
         {
-            double u = outer.Nodes[i], wi = outer.Weights[i];
+            double u = outerNodes[i], wi = outerWeights[i];
             Vector3 r = sp.PointAt(u);
             if (subtract)
             {
                 var (c0, c1) = StaticLineIntegrals.Over(r, q0, tq, lq, a2);
                 s00 += wi * c0; s10 += wi * u * c0; s01 += wi * c1; s11 += wi * u * c1;
             }
-            for (int j = 0; j < inner.Nodes.Length; j++)
+            for (int j = 0; j < innerNodes.Length; j++)
             {
-                double v = inner.Nodes[j], w = wi * inner.Weights[j];
-                Vector3 rq = q0 + (v * lq) * tq;
-                double dist = Math.Sqrt((r - rq).LengthSquared + a2);
-                _r[_points] = dist; _w[_points] = w; _wu[_points] = w * u; _wv[_points] = w * v; _wuv[_points] = w * u * v;
-                _points++;
+                Vector3 rq = q0 + (innerNodes[j] * lq) * tq;
+                _r[_points++] = Math.Sqrt((r - rq).LengthSquared + a2);
             }
         }
-        _count.Add(_points - _start[^1]);
         _s00.Add(s00); _s10.Add(s10); _s01.Add(s01); _s11.Add(s11);
-    }
-
-    private void Grow(int size)
-    {
-        Array.Resize(ref _r, size); Array.Resize(ref _w, size); Array.Resize(ref _wu, size);
-        Array.Resize(ref _wv, size); Array.Resize(ref _wuv, size);
     }
 
     private void Freeze()
     {
         P = _p.ToArray(); Q = _q.ToArray(); Image = _image.ToArray(); Subtracted = _subtracted.ToArray();
-        TangentDot = _tangentDot.ToArray(); Start = _start.ToArray(); Count = _count.ToArray();
+        Rule = _rule.ToArray(); Rules = _rules.ToArray();
+        TangentDot = _tangentDot.ToArray(); Start = _start.ToArray();
         S00 = _s00.ToArray(); S10 = _s10.ToArray(); S01 = _s01.ToArray(); S11 = _s11.ToArray();
-        R = _r[.._points]; W = _w[.._points]; WU = _wu[.._points]; WV = _wv[.._points]; WUV = _wuv[.._points];
-        InverseR = new double[_points];
-        for (int i = 0; i < _points; i++) InverseR[i] = 1 / R[i];
-        StaticOffset = new double[R.Length];
-        for (int e = 0; e < P.Length; e++)
-            if (Subtracted[e]) Array.Fill(StaticOffset, 1.0, Start[e], Count[e]);
+        R = _r[.._points];
     }
-
-    public int PointCount => R.Length;
 
     /// <summary>
-    /// Kernel value at every quadrature point at wavenumber k: g = (e^{−jkR} − s)/R with s = 1 where the
-    /// static part was taken out. Scalar Math.SinCos on purpose: the SIMD sine and cosine of the runtime
-    /// may fuse multiply-adds differently before and after the JIT re-optimizes a method, which made two
-    /// solves of the same frequency differ in the last bits; results here must be bit-reproducible.
+    /// The four kernel moments of pair <paramref name="e"/> at wavenumber k (rad/m). Scalar
+    /// Math.SinCos on purpose: the runtime's SIMD sine and cosine may fuse multiply-adds differently
+    /// before and after the JIT re-optimizes a method, which made two solves of the same frequency differ
+    /// in the last bits; results here must be bit-reproducible.
     /// </summary>
-    public void KernelValues(double k, Span<double> real, Span<double> imaginary)
-    {
-        int n = R.Length, i = 0;
-        for (; i < n; i++)
-        {
-            var (sin, cos) = Math.SinCos(k * R[i]);
-            real[i] = (cos - StaticOffset[i]) * InverseR[i];
-            imaginary[i] = -sin * InverseR[i];
-        }
-    }
-
-    /// <summary>The four kernel moments of pair <paramref name="e"/> from precomputed kernel values.</summary>
-    public void Moments(int e, ReadOnlySpan<double> gr, ReadOnlySpan<double> gi, out Complex i00, out Complex i10, out Complex i01, out Complex i11)
-    {
-        double r00 = 0, x00 = 0, r10 = 0, x10 = 0, r01 = 0, x01 = 0, r11 = 0, x11 = 0;
-        int end = Start[e] + Count[e];
-        double[] w = W, wu = WU, wv = WV, wuv = WUV;
-        for (int i = Start[e]; i < end; i++)
-        {
-            double a = gr[i], b = gi[i];
-            r00 += w[i] * a; x00 += w[i] * b;
-            r10 += wu[i] * a; x10 += wu[i] * b;
-            r01 += wv[i] * a; x01 += wv[i] * b;
-            r11 += wuv[i] * a; x11 += wuv[i] * b;
-        }
-        if (Subtracted[e]) { r00 += S00[e]; r10 += S10[e]; r01 += S01[e]; r11 += S11[e]; }
-        i00 = new Complex(r00, x00); i10 = new Complex(r10, x10); i01 = new Complex(r01, x01); i11 = new Complex(r11, x11);
-    }
-
-    /// <summary>The four kernel moments of pair <paramref name="e"/> at wavenumber k (rad/m), plain scalar reference.</summary>
     public void Moments(int e, double k, out Complex i00, out Complex i10, out Complex i01, out Complex i11)
     {
         double r00 = 0, x00 = 0, r10 = 0, x10 = 0, r01 = 0, x01 = 0, r11 = 0, x11 = 0;
-        int end = Start[e] + Count[e];
-        bool sub = Subtracted[e];
-        double[] rr = R, w = W, wu = WU, wv = WV, wuv = WUV;
-        for (int i = Start[e]; i < end; i++)
+        var rule = Rules[Rule[e]];
+        double[] w = rule.W, wu = rule.WU, wv = rule.WV, wuv = rule.WUV;
+        double offset = Subtracted[e] ? 1.0 : 0.0;
+        var distances = R.AsSpan(Start[e], w.Length);
+        for (int i = 0; i < distances.Length; i++)
         {
-            double dist = rr[i];
+            double dist = distances[i];
             var (sin, cos) = Math.SinCos(k * dist);
             double inv = 1.0 / dist;
-            double gr = (sub ? cos - 1 : cos) * inv;
+            double gr = (cos - offset) * inv;
             double gi = -sin * inv;
             r00 += w[i] * gr; x00 += w[i] * gi;
             r10 += wu[i] * gr; x10 += wu[i] * gi;
             r01 += wv[i] * gr; x01 += wv[i] * gi;
             r11 += wuv[i] * gr; x11 += wuv[i] * gi;
         }
-        if (sub) { r00 += S00[e]; r10 += S10[e]; r01 += S01[e]; r11 += S11[e]; }
+        if (offset != 0) { r00 += S00[e]; r10 += S10[e]; r01 += S01[e]; r11 += S11[e]; }
         i00 = new Complex(r00, x00); i10 = new Complex(r10, x10); i01 = new Complex(r01, x01); i11 = new Complex(r11, x11);
     }
 }

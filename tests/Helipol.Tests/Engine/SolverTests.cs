@@ -36,24 +36,4 @@ public class SolverTests
         DenseLuSolver.Instance.Solve((Complex[])a.Clone(), n, b, solved);
         for (int i = 0; i < n; i++) Assert.True((solved[i] - x[i]).Magnitude < 1e-10);
     }
-
-    // The batched kernel evaluation must match the per-pair scalar reference.
-    [Fact]
-    public void BatchedKernelMatchesScalarReference()
-    {
-        var mesh = MeshedModel.Create(InvariantTests.Awkward(), 1.2e9);
-        var table = mesh.Table;
-        double k = 2 * Math.PI * 1.1e9 / PhysicalConstants.SpeedOfLight;
-        var gr = new double[table.PointCount];
-        var gi = new double[table.PointCount];
-        table.KernelValues(k, gr, gi);
-        for (int e = 0; e < table.PairCount; e++)
-        {
-            table.Moments(e, gr, gi, out var a00, out var a10, out var a01, out var a11);
-            table.Moments(e, k, out var b00, out var b10, out var b01, out var b11);
-            double scale = Math.Max(b00.Magnitude, 1e-30);
-            Assert.True((a00 - b00).Magnitude < 1e-12 * scale && (a10 - b10).Magnitude < 1e-12 * scale
-                        && (a01 - b01).Magnitude < 1e-12 * scale && (a11 - b11).Magnitude < 1e-12 * scale, $"pair {e}");
-        }
-    }
 }
