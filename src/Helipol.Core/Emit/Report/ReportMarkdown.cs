@@ -92,6 +92,11 @@ public static class ReportMarkdown
         L($"Practice scaling is the builders' 5.8 GHz rule (about 16 mm elements, 12.7 mm rise, common practice, no source) scaled by wavelength, with pinned values kept. It is {(s.Practice.Layout.LengthM - s.Layout.LengthM) * 1e3:+0.00;−0.00} mm in length and {(s.Practice.Layout.RiseM - s.Layout.RiseM) * 1e3:+0.00;−0.00} mm in rise from the solution; its worst AR in the same window is {Worst(s.Practice)}.");
         L($"The rule was stated for one build (foam, PVC tape, 5.8 GHz); the field model includes this design's own whip, former diameter, wire and wrap, so the two differ wherever those differ, and the model's dielectric loading rests on one calibration (factor {s.Calibration.Factor:0.###}).");
         if (s.Practice.Problem is { } problem) L($"The practice layout could not be modelled: {problem}");
+        if (s.Calibration.Factor == CoatingCalibration.DefaultFactor)
+        {
+            L($"");
+            L($"{CoatingCalibration.DefaultComparison}");
+        }
         return r.ToString();
     }
 
