@@ -21,6 +21,11 @@ public static class CliApp
         root.Subcommands.Add(BuildVerb.Create(console));
         root.Subcommands.Add(NewVerb.Create(console));
         root.Subcommands.Add(SchemaVerb.Create(console));
+        root.Subcommands.Add(AnalyzeVerb.Create(console));
+        root.Subcommands.Add(SweepVerb.Create(console));
+        root.Subcommands.Add(ToleranceVerb.Create(console));
+        root.Subcommands.Add(CalibrateVerb.Create(console));
+        root.Subcommands.Add(MismatchVerb.Create(console));
 
         foreach (var option in root.Options.OfType<VersionOption>())
             option.Action = new PrintVersion(output);
@@ -34,6 +39,12 @@ public static class CliApp
         try
         {
             return parsed.Invoke(new InvocationConfiguration { Output = output, Error = error, EnableDefaultExceptionHandler = false });
+        }
+        catch (Helipol.Design.CalibrationException ex)
+        {
+            // A design's calibration file is input too: one line, exit 2, nothing written.
+            error.WriteLine(ex.Message);
+            return ExitCodes.BadInput;
         }
         catch (Exception ex) when (ex is IOException or UnauthorizedAccessException)
         {

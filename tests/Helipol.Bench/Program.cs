@@ -24,6 +24,7 @@ public static class Program
         SingleFrequency(repetitions);
         FillScaling();
         SweepParallelism();
+        DesignBench.Run();
         return 0;
     }
 

@@ -1,13 +1,16 @@
 using System.CommandLine;
+using Helipol.Design;
 using Helipol.Emit;
+using Helipol.Emit.Report;
 using Helipol.Model;
 using Helipol.Spec;
 
 namespace Helipol.Cli.Verbs;
 
 /// <summary>
-/// <c>helipol build FILE... [-o DIR]</c>: writes <c>DIR/&lt;name&gt;/design.json</c> per design.
-/// Every file is checked before anything is written, so one bad design leaves the output untouched.
+/// <c>helipol build FILE... [-o DIR]</c>: solves each design and writes <c>DIR/&lt;name&gt;/</c>:
+/// design.json (with the solved values), report.md and its plots. Every file is checked and every
+/// design solved before anything is written, so a bad design leaves the output untouched.
 /// </summary>
 public static class BuildVerb
 {
@@ -15,7 +18,7 @@ public static class BuildVerb
     {
         var files = new Argument<string[]>("FILE") { Description = "design files (.yaml)", Arity = ArgumentArity.OneOrMore };
         var outputDir = new Option<string>("--output", "-o") { Description = "folder that receives one sub-folder per design", DefaultValueFactory = _ => "output" };
-        var command = new Command("build", "Check designs, then write output/<name>/design.json (and later the fabrication files).") { files, outputDir };
+        var command = new Command("build", "Check and solve designs, then write output/<name>/: design.json, report.md and plots.") { files, outputDir };
         command.SetAction(parse =>
         {
             var designs = DesignLoader.LoadAll(parse.GetValue(files)!, console);
@@ -28,12 +31,30 @@ public static class BuildVerb
                     "a name unique among the designs built together (it names the output folder)").ToString());
                 return ExitCodes.BadInput;
             }
-            var root = parse.GetValue(outputDir)!;
+            var results = new List<(PolarizerDesign Design, IReadOnlyList<(string Name, byte[] Bytes)> Files, long Solves)>();
             foreach (var design in designs)
             {
-                var target = Path.Combine(root, design.Name, "design.json");
-                AtomicFile.WriteAllText(target, DesignJson.Write(design));
-                console.Out.WriteLine($"wrote {target}");
+                var counter = new FieldSolveCounter();
+                SolvedPolarizer solved;
+                try
+                {
+                    solved = SolveRunner.Solve(console, design, counter);
+                }
+                catch (SearchException ex)
+                {
+                    console.Error.WriteLine($"{design.SourceFile}: polarizer: found {ex.Message}, allowed a search range with buildable geometry (widen solve.search or the former)");
+                    return ExitCodes.BadInput;
+                }
+                var sweep = BandSweep.Run(design, solved.Build, counter: counter);
+                var tolerance = ToleranceAnalysis.Run(design, solved.Build, counter: counter);
+                results.Add((design, ReportFiles.Make(design, solved, sweep, tolerance), counter.Count));
+            }
+            var root = parse.GetValue(outputDir)!;
+            foreach (var (design, made, solves) in results)
+            {
+                foreach (var (name, bytes) in made)
+                    AtomicFile.WriteAllBytes(Path.Combine(root, design.Name, name), bytes);
+                console.Out.WriteLine($"wrote {Path.Combine(root, design.Name)}/ ({string.Join(", ", made.Select(m => m.Name))}; {solves} field solves)");
             }
             return ExitCodes.Ok;
         });

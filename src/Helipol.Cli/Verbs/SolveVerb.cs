@@ -1,32 +1,52 @@
 using System.CommandLine;
 using System.Globalization;
+using Helipol.Design;
+using Helipol.Emit.Report;
 using Helipol.Model;
 using Spectre.Console;
 
 namespace Helipol.Cli.Verbs;
 
 /// <summary>
-/// <c>helipol solve FILE [--json]</c>: the resolved design and element length and rise. Until the
-/// field solver is wired in, the element values shown are practice scaling, labelled as such.
+/// <c>helipol solve FILE [--json]</c>: searches element length and rise (and count and diameter
+/// when auto) with the field model and shows them beside the practice-scaling values. --json
+/// prints design.json with the solved values, the sweep, the tolerance analysis and the practice column;
+/// --map writes the search's axial-ratio map as a PNG heat map.
 /// </summary>
 public static class SolveVerb
 {
     public static Command Create(CliConsole console)
     {
         var file = new Argument<string>("FILE") { Description = "design file (.yaml)" };
-        var json = new Option<bool>("--json") { Description = "print the resolved design as JSON (the same as design.json)" };
-        var command = new Command("solve", "Show the resolved design and element length and rise.") { file, json };
+        var json = new Option<bool>("--json") { Description = "print design.json with the solved values, sweep, tolerance and practice column" };
+        var map = new Option<string>("--map") { Description = "also write the axial-ratio map of the search as a PNG heat map to this file" };
+        var command = new Command("solve", "Solve element length and rise with the field model; show them beside practice scaling.") { file, json, map };
         command.SetAction(parse =>
         {
             var designs = DesignLoader.LoadAll(new[] { parse.GetValue(file)! }, console);
             if (designs is null) return ExitCodes.BadInput;
             var design = designs[0];
+            var counter = new FieldSolveCounter();
+            SolvedPolarizer solved;
+            try
+            {
+                solved = SolveRunner.Solve(console, design, counter);
+            }
+            catch (SearchException ex)
+            {
+                console.Error.WriteLine($"{design.SourceFile}: polarizer: found {ex.Message}, allowed a search range with buildable geometry (widen solve.search or the former)");
+                return ExitCodes.BadInput;
+            }
+            if (parse.GetValue(map) is { } mapFile)
+                Helipol.Emit.AtomicFile.WriteAllBytes(mapFile, ReportPlots.AxialRatioMap(solved.Search.Map, solved.Layout.LengthM, solved.Layout.RiseM, design.Name));
             if (parse.GetValue(json))
             {
-                console.Out.Write(DesignJson.Write(design));
+                var sweep = BandSweep.Run(design, solved.Build, counter: counter);
+                var tolerance = ToleranceAnalysis.Run(design, solved.Build, counter: counter);
+                console.Out.Write(SolvedJson.Write(design, solved, sweep, tolerance));
                 return ExitCodes.Ok;
             }
-            Show(console.Tables, design);
+            Show(console.Tables, design, solved);
             return ExitCodes.Ok;
         });
         return command;
@@ -36,7 +56,7 @@ public static class SolveVerb
     private static string MHz(double hz) => (hz / 1e6).ToString("0.###", CultureInfo.InvariantCulture) + " MHz";
     private static string Deg(double rad) => (rad * 180 / Math.PI).ToString("0.0", CultureInfo.InvariantCulture) + " deg";
 
-    private static void Show(IAnsiConsole console, PolarizerDesign d)
+    private static void Show(IAnsiConsole console, PolarizerDesign d, SolvedPolarizer s)
     {
         var p = d.Polarizer;
         var design = new Table().Title($"design {Markup.Escape(d.Name)}").AddColumn("quantity").AddColumn("value");
@@ -46,26 +66,34 @@ public static class SolveVerb
         Row("whip", $"{(d.Whip.Kind == WhipKind.Monopole ? "monopole" : "dipole")}, {Mm(d.Whip.LengthM)} long, {Mm(d.Whip.DiameterM)} diameter"
             + (d.Whip.CoverDiameterM is { } c ? $", cover {Mm(c)}" : ""));
         Row("sense", p.Sense == Sense.Lhcp ? "LHCP" : "RHCP");
-        Row("wire", $"{Mm(p.Wire.DiameterM)} {p.Wire.Material.Name}" + (p.Wire.ConductivitySPerM is { } s ? $", {s.Value.ToString("0.###e0", CultureInfo.InvariantCulture)} S/m" : ", lossless"));
+        Row("wire", $"{Mm(p.Wire.DiameterM)} {p.Wire.Material.Name}" + (p.Wire.ConductivitySPerM is { } sigma ? $", {sigma.Value.ToString("0.###e0", CultureInfo.InvariantCulture)} S/m" : ", lossless"));
         Row("former", $"{p.Former.Material.Name}, bore {Mm(p.Former.BoreM)}, height {Mm(p.Former.HeightM)}, εr {p.Former.RelativePermittivity.Value.ToString("0.###", CultureInfo.InvariantCulture)}");
         Row("wrap", p.Wrap is { } w ? $"{w.Layers} × {Mm(w.LayerThicknessM.Value)} {w.Material.Name}, εr {w.RelativePermittivity.Value.ToString("0.##", CultureInfo.InvariantCulture)}" : "none");
         Row("glue", p.Glue is { } g ? $"{Mm(g.ThicknessM)} {g.Material.Name}" : "none");
         console.Write(design);
 
-        var practice = d.Practice;
-        var elements = new Table().Title(Markup.Escape($"elements ({PracticeScaling.Label})")).AddColumn("quantity").AddColumn("value").AddColumn("from");
-        string From(bool pinned) => pinned ? "design file" : "practice scaling";
-        elements.AddRow("elements", practice.Count.ToString(CultureInfo.InvariantCulture), From(p.ElementCount is not null));
-        elements.AddRow("element length", Mm(practice.LengthM), From(p.ElementLengthM is not null));
-        elements.AddRow("element rise", Mm(practice.RiseM), From(p.ElementRiseM is not null));
-        elements.AddRow("former outer diameter", Mm(practice.OuterDiameterM), From(p.Former.OuterDiameterM is not null));
-        elements.AddRow("element axis radius", Mm(practice.AxisRadiusM), "derived");
-        elements.AddRow("arc angle", Deg(practice.ArcAngleRad), "derived");
-        elements.AddRow("pitch angle", Deg(practice.PitchAngleRad), "derived");
-        elements.AddRow("winding", p.Winding == Winding.Auto ? $"{PracticeScaling.WindingFor(p.Sense).ToString().ToLowerInvariant()} (builders' rule)" : p.Winding.ToString().ToLowerInvariant(),
-            p.Winding == Winding.Auto ? "practice scaling" : "design file");
+        var practice = s.Practice.Layout;
+        var elements = new Table().Title(Markup.Escape($"elements: solved by the field model, with {PracticeScaling.Label} beside"))
+            .AddColumn("quantity").AddColumn("solved").AddColumn("practice scaling").AddColumn("from");
+        string From(bool pinned) => pinned ? "design file" : "search";
+        string W(Winding w) => w == Winding.Left ? "left" : "right";
+        elements.AddRow("elements", s.Layout.Count.ToString(CultureInfo.InvariantCulture), practice.Count.ToString(CultureInfo.InvariantCulture), From(s.CountPinned));
+        elements.AddRow("element length", Mm(s.Layout.LengthM), Mm(practice.LengthM), From(s.LengthPinned));
+        elements.AddRow("element rise", Mm(s.Layout.RiseM), Mm(practice.RiseM), From(s.RisePinned));
+        elements.AddRow("former outer diameter", Mm(s.Layout.OuterDiameterM), Mm(practice.OuterDiameterM), From(s.DiameterPinned));
+        elements.AddRow("element axis radius", Mm(s.Layout.AxisRadiusM), Mm(practice.AxisRadiusM), "derived");
+        elements.AddRow("arc angle", Deg(s.Layout.ArcAngleRad), Deg(practice.ArcAngleRad), "derived");
+        elements.AddRow("pitch angle", Deg(s.Layout.PitchAngleRad), Deg(practice.PitchAngleRad), "derived");
+        elements.AddRow("winding", W(s.Winding), W(s.Practice.Winding) + " (builders' rule)", s.WindingPinned ? "design file" : "field model");
+        elements.AddRow(Markup.Escape($"worst AR, {(s.Sense == Sense.Lhcp ? "LHCP" : "RHCP")}"), Db(s.WorstAxialRatioDb),
+            s.Practice.ObjectiveDb is null ? "not modelled" : Db(s.Practice.Points.Max(p => p.WorstScoreDb)), "field model");
+        elements.AddRow("mean gain, wanted sense", Db(s.MeanGainDbic) + "ic", "", "field model");
         console.Write(elements);
-        console.WriteLine("Practice scaling: the 5.8 GHz rule of thumb scaled by wavelength.");
-        console.WriteLine("It is a starting point, not a solved result.");
+        console.WriteLine(string.Create(CultureInfo.InvariantCulture,
+            $"Calibration factor {s.Calibration.Factor:0.###}: {s.Calibration.Source}."));
+        console.WriteLine(string.Create(CultureInfo.InvariantCulture, $"{s.Search.Evaluations} geometries scored, {s.FieldSolves} field solves."));
+        console.WriteLine("Practice scaling: the 5.8 GHz rule of thumb scaled by wavelength; not a solved result.");
     }
+
+    private static string Db(double db) => db.ToString("0.0", CultureInfo.InvariantCulture) + " dB";
 }

@@ -1,0 +1,53 @@
+using Helipol.Design;
+using Helipol.Model;
+using Helipol.Spec;
+using Spectre.Console;
+
+namespace Helipol.Cli;
+
+/// <summary>Shared by solve, sweep, tolerance and build: solves a design with a progress line on an interactive terminal.</summary>
+public static class SolveRunner
+{
+    public static SolvedPolarizer Solve(CliConsole console, PolarizerDesign design, FieldSolveCounter counter)
+    {
+        SolvedPolarizer? solved = null;
+        if (console.Tables.Profile.Capabilities.Interactive)
+            console.Tables.Status().Start($"solving {design.Name}", ctx =>
+            {
+                solved = PolarizerSolver.Solve(design, counter, new Progress<string>(s => ctx.Status(Markup.Escape(s))));
+            });
+        else solved = PolarizerSolver.Solve(design, counter);
+        return solved!;
+    }
+
+    /// <summary>Error line for a verb that needs a pinned geometry (file:line:column: key: found auto, allowed ...).</summary>
+    public static string PinnedError(PolarizerDesign design, string keyPath)
+    {
+        var doc = SpecReader.ReadFile(design.SourceFile, design.SourceFile);
+        var mark = doc.Find(keyPath)?.Mark;
+        return new SpecError(design.SourceFile, mark ?? SourceMark.FileStart, keyPath, "auto",
+            "a pinned value (this verb evaluates the geometry as written; run 'helipol solve' to choose it)").ToString();
+    }
+
+    /// <summary>The pinned geometry and winding, or an error line.</summary>
+    public static PolarizerBuild? PinnedBuild(PolarizerDesign design, out string? error)
+    {
+        error = null;
+        try
+        {
+            var layout = PinnedLayout.Require(design);
+            if (design.Polarizer.Winding == Winding.Auto)
+            {
+                error = PinnedError(design, "polarizer.winding");
+                return null;
+            }
+            return PolarizerBuild.From(design, layout.Count, layout.LengthM, layout.RiseM, layout.OuterDiameterM, design.Polarizer.Winding,
+                CoatingCalibration.For(design).Factor);
+        }
+        catch (PinnedLayoutException ex)
+        {
+            error = PinnedError(design, ex.KeyPath);
+            return null;
+        }
+    }
+}

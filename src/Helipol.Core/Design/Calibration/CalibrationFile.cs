@@ -1,0 +1,58 @@
+using System.Globalization;
+using System.Text;
+using YamlDotNet.RepresentationModel;
+
+namespace Helipol.Design;
+
+/// <summary>
+/// Reads and writes calibration files (YAML): <c>material_set</c>, <c>loading_factor</c> (the factor
+/// on the coating's added inductance), <c>fitted_by</c>, <c>design</c>, <c>source</c>. Only
+/// <c>loading_factor</c> is required.
+/// </summary>
+public static class CalibrationFile
+{
+    public static CoatingCalibration Read(string path, string? shownAs = null)
+    {
+        string shown = shownAs ?? path;
+        var yaml = new YamlStream();
+        try
+        {
+            using var reader = new StreamReader(path, Encoding.UTF8);
+            yaml.Load(reader);
+        }
+        catch (YamlDotNet.Core.YamlException ex)
+        {
+            throw new CalibrationException($"{shown}:{ex.Start.Line}:{ex.Start.Column}: calibration: found text that is not YAML, allowed a mapping of calibration keys");
+        }
+        if (yaml.Documents.Count == 0 || yaml.Documents[0].RootNode is not YamlMappingNode root)
+            throw new CalibrationException($"{shown}:1:1: calibration: found no mapping, allowed a mapping with loading_factor");
+        string? Text(string key) => root.Children.TryGetValue(new YamlScalarNode(key), out var n) && n is YamlScalarNode s ? s.Value : null;
+        if (!root.Children.TryGetValue(new YamlScalarNode("loading_factor"), out var factorNode))
+            throw new CalibrationException($"{shown}:{root.Start.Line}:{root.Start.Column}: loading_factor: found nothing, allowed a number ≥ 0");
+        var written = (factorNode as YamlScalarNode)?.Value;
+        if (!double.TryParse(written, NumberStyles.Float, CultureInfo.InvariantCulture, out var factor) || !double.IsFinite(factor) || factor < 0 || factor > 1000)
+            throw new CalibrationException($"{shown}:{factorNode.Start.Line}:{factorNode.Start.Column}: loading_factor: found '{written}', allowed a number from 0 to 1000");
+        return new CoatingCalibration(Text("material_set") ?? "unnamed", factor, Text("fitted_by") ?? "not stated", Text("design"),
+            Text("source") ?? $"calibration file {shown}");
+    }
+
+    /// <summary>The file text: comments say what the number means; no timestamp, so the same fit gives the same bytes.</summary>
+    public static string Write(CoatingCalibration c)
+    {
+        var s = new StringBuilder();
+        s.Append("# helipol calibration: a factor on the added inductance of the dielectric around the elements\n");
+        s.Append("# (effective-coating model, Design/Wires/EffectiveCoating.cs). Reference it from a design with\n");
+        s.Append("# `calibration: <path to this file>`.\n");
+        s.Append("material_set: ").Append(Quote(c.MaterialSet)).Append('\n');
+        s.Append("loading_factor: ").Append(c.Factor.ToString("0.####", CultureInfo.InvariantCulture)).Append('\n');
+        s.Append("fitted_by: ").Append(Quote(c.FittedBy)).Append('\n');
+        if (c.FromDesign is { } d) s.Append("design: ").Append(Quote(d)).Append('\n');
+        s.Append("source: ").Append(Quote(c.Source)).Append('\n');
+        return s.ToString();
+    }
+
+    private static string Quote(string text) => "\"" + text.Replace("\\", "\\\\").Replace("\"", "\\\"") + "\"";
+}
+
+/// <summary>A calibration file that cannot be used; the message is one line with file:line:column.</summary>
+public sealed class CalibrationException(string message) : Exception(message);

@@ -1,0 +1,43 @@
+using Helipol.Model;
+
+namespace Helipol.Design;
+
+/// <summary>
+/// What a builder can make: the limits a searched geometry must respect. Margins are workshop
+/// habits (common practice, no source), stated here so a reviewer can change them in one place.
+/// </summary>
+public sealed record FabricationLimits(double FormerHeightM, double WireDiameterM, double CentreHeightM, bool OnGround)
+{
+    /// <summary>Foam left above and below the element ends, in wire diameters, so the ends stay held (common practice, no source).</summary>
+    public const double EndMarginInWireDiameters = 1;
+
+    /// <summary>Free gap between neighbouring wires beyond one wire diameter, m: room for glue and hand placement (common practice, no source).</summary>
+    public const double ExtraGapM = 0.5e-3;
+
+    /// <summary>Tightest bend radius of the helix, in wire diameters; tighter bends crack hard wire (common practice, no source).</summary>
+    public const double MinimumBendRadiusInWireDiameters = 2;
+
+    /// <summary>An element must run at least this share of its length around the former (rise &lt; length with room for an arc).</summary>
+    public const double MinimumRunFraction = 0.2;
+
+    public static FabricationLimits For(PolarizerDesign design) => new(
+        design.Polarizer.Former.HeightM, design.Polarizer.Wire.DiameterM, design.Polarizer.CentreHeightM, design.Whip.Kind == WhipKind.Monopole);
+
+    /// <summary>Largest rise that fits the former height with the end margins.</summary>
+    public double MaximumRiseM => FormerHeightM - 2 * EndMarginInWireDiameters * WireDiameterM - WireDiameterM;
+
+    /// <summary>Null when the layout can be built; otherwise the first reason it cannot.</summary>
+    public string? Violation(ElementLayout layout)
+    {
+        double d = WireDiameterM;
+        if (layout.RiseM <= 0) return "rise must be positive";
+        if (layout.RiseM > MaximumRiseM + 1e-12) return "rise does not fit the former height";
+        if (layout.ArcLengthM < MinimumRunFraction * layout.LengthM) return "rise too close to the element length";
+        if (ElementClearance.MinimumAxisDistanceM(layout) < 2 * d + ExtraGapM) return "neighbouring elements too close";
+        double pitchOverTurn = layout.RiseM / layout.ArcAngleRad; // helix c = rise per radian
+        double r = layout.AxisRadiusM;
+        if ((r * r + pitchOverTurn * pitchOverTurn) / r < MinimumBendRadiusInWireDiameters * d) return "bend radius too tight";
+        if (OnGround && CentreHeightM - layout.RiseM / 2 < d) return "element touches the ground plane";
+        return null;
+    }
+}

@@ -1,0 +1,142 @@
+using Helipol.Design;
+using Helipol.Model;
+using ScottPlot;
+
+namespace Helipol.Emit.Report;
+
+/// <summary>
+/// The report's plots as PNG bytes (ScottPlot 5). Fixed pixel sizes, fixed colours, no dates, so
+/// the same results give the same bytes on one machine.
+/// </summary>
+public static class ReportPlots
+{
+    public const int Width = 900, Height = 560, PolarSize = 620;
+
+    /// <summary>Axial ratio (wanted sense) and circular gains against frequency, with the bare whip's gain and the band edges.</summary>
+    public static byte[] AxialRatioAndGain(SweepResult sweep, PolarizerDesign design)
+    {
+        var plt = new Plot();
+        var f = sweep.Points.Select(p => p.Polarizer.FrequencyHz / 1e6).ToArray();
+        var ar = plt.Add.Scatter(f, sweep.Points.Select(p => Math.Min(40, p.Polarizer.WorstScoreDb)).ToArray());
+        ar.LegendText = $"worst AR, {Word(design.Polarizer.Sense)} (dB, left axis)";
+        ar.MarkerSize = 0;
+        ar.LineWidth = 2;
+        ar.Color = Colors.Black;
+        var rh = plt.Add.Scatter(f, sweep.Points.Select(p => p.Polarizer.GainRhcpDbic).ToArray());
+        rh.LegendText = "RHCP gain (dBic, right axis)";
+        rh.MarkerSize = 0;
+        rh.Color = Colors.Red;
+        rh.Axes.YAxis = plt.Axes.Right;
+        var lh = plt.Add.Scatter(f, sweep.Points.Select(p => p.Polarizer.GainLhcpDbic).ToArray());
+        lh.LegendText = "LHCP gain (dBic, right axis)";
+        lh.MarkerSize = 0;
+        lh.Color = Colors.Blue;
+        lh.Axes.YAxis = plt.Axes.Right;
+        var bare = plt.Add.Scatter(f, sweep.Points.Select(p => p.BareWhipGainDbic).ToArray());
+        bare.LegendText = $"bare whip, {Word(design.Polarizer.Sense)} (dBic, right axis)";
+        bare.MarkerSize = 0;
+        bare.Color = Colors.Gray;
+        bare.LinePattern = LinePattern.Dashed;
+        bare.Axes.YAxis = plt.Axes.Right;
+        var limit = plt.Add.HorizontalLine(3);
+        limit.Color = Colors.Black.WithAlpha(0.4);
+        limit.LinePattern = LinePattern.Dotted;
+        foreach (var edge in new[] { design.Band.LowHz, design.Band.HighHz })
+        {
+            var v = plt.Add.VerticalLine(edge / 1e6);
+            v.Color = Colors.Green.WithAlpha(0.6);
+            v.LinePattern = LinePattern.Dashed;
+        }
+        plt.Title($"{design.Name}: axial ratio and gain, {ElevationWord(sweep.ElevationRad)}");
+        plt.XLabel("frequency (MHz)");
+        plt.YLabel("axial ratio (dB)");
+        plt.Axes.Right.Label.Text = "gain (dBic)";
+        plt.ShowLegend(Alignment.UpperRight);
+        return plt.GetImageBytes(Width, Height, ImageFormat.Png);
+    }
+
+    /// <summary>VSWR against 50 Ω with and without the polarizer.</summary>
+    public static byte[] Vswr(SweepResult sweep, PolarizerDesign design)
+    {
+        var plt = new Plot();
+        var f = sweep.Points.Select(p => p.Polarizer.FrequencyHz / 1e6).ToArray();
+        var with = plt.Add.Scatter(f, sweep.Points.Select(p => Math.Min(20, p.Polarizer.Vswr50)).ToArray());
+        with.LegendText = "with polarizer";
+        with.MarkerSize = 0;
+        with.Color = Colors.Black;
+        var without = plt.Add.Scatter(f, sweep.Points.Select(p => Math.Min(20, p.BareWhipVswr50)).ToArray());
+        without.LegendText = "bare whip";
+        without.MarkerSize = 0;
+        without.Color = Colors.Gray;
+        without.LinePattern = LinePattern.Dashed;
+        plt.Title($"{design.Name}: VSWR against 50 Ω (capped at 20)");
+        plt.XLabel("frequency (MHz)");
+        plt.YLabel("VSWR");
+        plt.ShowLegend(Alignment.UpperRight);
+        return plt.GetImageBytes(Width, Height, ImageFormat.Png);
+    }
+
+    /// <summary>A polar plot of one cut: radius = gain above a floor 30 dB under the peak, RHCP and LHCP.</summary>
+    public static byte[] Polar(PatternCut cut, string title)
+    {
+        var plt = new Plot();
+        double peak = Math.Max(cut.GainRhcpDbic.Max(), cut.GainLhcpDbic.Max());
+        double top = Math.Ceiling(peak / 5) * 5 + 0.0, floor = top - 30; // + 0.0 turns −0 into 0 for the label
+        var axis = plt.Add.PolarAxis(30);
+        axis.SetCircles(30, 6);
+        axis.SetSpokes(12, 33, true);
+        Coordinates[] Curve(double[] gains) => cut.AnglesDeg.Append(cut.AnglesDeg[0] + 360)
+            .Zip(gains.Append(gains[0]), (a, g) => axis.GetCoordinates(Math.Max(0, g - floor), a)).ToArray();
+        var r = plt.Add.Scatter(Curve(cut.GainRhcpDbic));
+        r.LegendText = "RHCP";
+        r.MarkerSize = 0;
+        r.LineWidth = 2;
+        r.Color = Colors.Red;
+        var l = plt.Add.Scatter(Curve(cut.GainLhcpDbic));
+        l.LegendText = "LHCP";
+        l.MarkerSize = 0;
+        l.LineWidth = 2;
+        l.Color = Colors.Blue;
+        plt.ShowLegend(Alignment.UpperRight);
+        plt.Axes.Frameless();
+        plt.HideGrid();
+        // A frameless plot has no title panel: the title goes in as an annotation.
+        plt.Add.Annotation(FormattableString.Invariant($"{title}; outer ring {top:0} dBic, 5 dB per ring"), Alignment.UpperLeft);
+        return plt.GetImageBytes(PolarSize, PolarSize, ImageFormat.Png);
+    }
+
+    /// <summary>Heat map of the search's objective over element length × rise (blank: cannot be built).</summary>
+    public static byte[] AxialRatioMap(AxialRatioMap map, double? solvedLengthM, double? solvedRiseM, string name)
+    {
+        var plt = new Plot();
+        int nl = map.LengthsM.Length, nh = map.RisesM.Length;
+        // Rows are drawn top to bottom: row 0 = highest rise.
+        var data = new double[nh, nl];
+        for (int i = 0; i < nl; i++)
+            for (int j = 0; j < nh; j++)
+                data[nh - 1 - j, i] = Math.Min(40, map.ObjectiveDb[i, j]);
+        double dl = nl > 1 ? map.LengthsM[1] - map.LengthsM[0] : 1e-3;
+        double dh = nh > 1 ? map.RisesM[1] - map.RisesM[0] : 1e-3;
+        var hm = plt.Add.Heatmap(data);
+        hm.Extent = new CoordinateRect((map.LengthsM[0] - dl / 2) * 1e3, (map.LengthsM[^1] + dl / 2) * 1e3,
+            (map.RisesM[0] - dh / 2) * 1e3, (map.RisesM[^1] + dh / 2) * 1e3);
+        hm.Colormap = new ScottPlot.Colormaps.Viridis();
+        var bar = plt.Add.ColorBar(hm);
+        bar.Label = "objective (dB, capped at 40)";
+        if (solvedLengthM is { } l && solvedRiseM is { } h)
+        {
+            var m = plt.Add.Marker(l * 1e3, h * 1e3);
+            m.Color = Colors.Red;
+            m.Size = 14;
+            m.Shape = MarkerShape.Cross;
+        }
+        plt.Title($"{name}: axial-ratio map, {map.ElementCount} elements on {map.OuterDiameterM * 1e3:0.#} mm");
+        plt.XLabel("element length (mm)");
+        plt.YLabel("element rise (mm)");
+        return plt.GetImageBytes(Width, Height, ImageFormat.Png);
+    }
+
+    private static string Word(Sense s) => s == Sense.Rhcp ? "RHCP" : "LHCP";
+
+    private static string ElevationWord(double rad) => Math.Abs(rad) < 1e-9 ? "at the horizon" : FormattableString.Invariant($"{rad * 180 / Math.PI:0.#}° above the horizon");
+}

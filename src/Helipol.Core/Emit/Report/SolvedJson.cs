@@ -1,0 +1,173 @@
+using System.Text;
+using System.Text.Encodings.Web;
+using System.Text.Json;
+using System.Text.Json.Nodes;
+using Helipol.Design;
+using Helipol.Model;
+
+namespace Helipol.Emit.Report;
+
+/// <summary>
+/// <c>design.json</c> with the solver's results: the resolved design as <see cref="DesignJson"/>
+/// writes it, plus a <c>solved</c> object (geometry, calibration, band results, practice column,
+/// search record, and the sweep and tolerance when given). Deterministic: fixed key order,
+/// shortest round-trip numbers, non-finite numbers as null, "\n" line ends.
+/// </summary>
+public static class SolvedJson
+{
+    public static string Write(PolarizerDesign design, SolvedPolarizer solved, SweepResult? sweep = null, ToleranceResult? tolerance = null)
+    {
+        var root = JsonNode.Parse(DesignJson.Write(design))!.AsObject();
+        root["solved"] = JsonNode.Parse(SolvedObject(solved, sweep, tolerance));
+        using var buffer = new MemoryStream();
+        using (var json = new Utf8JsonWriter(buffer, Options)) root.WriteTo(json);
+        return Encoding.UTF8.GetString(buffer.ToArray()) + "\n";
+    }
+
+    private static readonly JsonWriterOptions Options = new() { Indented = true, NewLine = "\n", Encoder = JavaScriptEncoder.UnsafeRelaxedJsonEscaping };
+
+    private static string SolvedObject(SolvedPolarizer s, SweepResult? sweep, ToleranceResult? tolerance)
+    {
+        using var buffer = new MemoryStream();
+        using (var j = new Utf8JsonWriter(buffer, Options))
+        {
+            j.WriteStartObject();
+            j.WriteString("label", "solved by the method-of-moments field model");
+            Layout(j, s.Layout, s.Winding);
+            j.WriteString("sense", s.Sense == Sense.Lhcp ? "lhcp" : "rhcp");
+            j.WriteStartObject("pinned");
+            j.WriteBoolean("elements", s.CountPinned);
+            j.WriteBoolean("element_length", s.LengthPinned);
+            j.WriteBoolean("element_rise", s.RisePinned);
+            j.WriteBoolean("outer_diameter", s.DiameterPinned);
+            j.WriteBoolean("winding", s.WindingPinned);
+            j.WriteEndObject();
+            j.WriteStartObject("calibration");
+            j.WriteString("material_set", s.Calibration.MaterialSet);
+            Number(j, "loading_factor", s.Calibration.Factor);
+            j.WriteString("fitted_by", s.Calibration.FittedBy);
+            j.WriteString("source", s.Calibration.Source);
+            j.WriteEndObject();
+            Number(j, "objective_db", s.ObjectiveDb);
+            Number(j, "worst_axial_ratio_db", s.WorstAxialRatioDb);
+            Number(j, "mean_gain_dbic", s.MeanGainDbic);
+            Points(j, "band", s.Points);
+
+            j.WriteStartObject("practice");
+            j.WriteString("label", PracticeScaling.Label);
+            Layout(j, s.Practice.Layout, s.Practice.Winding);
+            Number(j, "objective_db", s.Practice.ObjectiveDb);
+            if (s.Practice.Problem is { } problem) j.WriteString("problem", problem);
+            Points(j, "band", s.Practice.Points);
+            j.WriteEndObject();
+
+            j.WriteStartObject("search");
+            j.WriteNumber("evaluations", s.Search.Evaluations);
+            j.WriteNumber("field_solves", s.FieldSolves);
+            j.WriteStartArray("steps");
+            foreach (var step in s.Search.Steps) j.WriteStringValue(step);
+            j.WriteEndArray();
+            j.WriteEndObject();
+
+            if (sweep is not null)
+            {
+                j.WriteStartObject("sweep");
+                Number(j, "elevation_deg", sweep.ElevationRad * 180 / Math.PI);
+                Number(j, "best_axial_ratio_frequency_hz", sweep.BestArFrequencyHz);
+                Number(j, "best_axial_ratio_db", sweep.BestArDb);
+                Number(j, "axial_ratio_3db_low_hz", sweep.BandwidthLowHz);
+                Number(j, "axial_ratio_3db_high_hz", sweep.BandwidthHighHz);
+                Number(j, "axial_ratio_3db_bandwidth_hz", sweep.BandwidthHz);
+                j.WriteStartArray("points");
+                foreach (var p in sweep.Points)
+                {
+                    j.WriteStartObject();
+                    Point(j, p.Polarizer);
+                    Number(j, "bare_whip_vswr_50", p.BareWhipVswr50);
+                    Number(j, "bare_whip_gain_dbic", p.BareWhipGainDbic);
+                    j.WriteEndObject();
+                }
+                j.WriteEndArray();
+                j.WriteEndObject();
+            }
+            if (tolerance is not null)
+            {
+                j.WriteStartObject("tolerance");
+                j.WriteNumber("builds", tolerance.Builds);
+                j.WriteNumber("seed", tolerance.Seed);
+                Number(j, "yield", tolerance.Yield);
+                Number(j, "axial_ratio_db_p10", tolerance.ArP10Db);
+                Number(j, "axial_ratio_db_p50", tolerance.ArP50Db);
+                Number(j, "axial_ratio_db_p90", tolerance.ArP90Db);
+                Number(j, "axial_ratio_db_per_mm_length", tolerance.ArPerMmLengthDb);
+                Number(j, "axial_ratio_db_per_mm_rise", tolerance.ArPerMmRiseDb);
+                Number(j, "best_ar_mhz_per_mm_length", tolerance.BestArMHzPerMmLength);
+                Number(j, "best_ar_mhz_per_mm_rise", tolerance.BestArMHzPerMmRise);
+                j.WriteString("trimming_hint", tolerance.TrimmingHint);
+                j.WriteNumber("field_solves", tolerance.FieldSolves);
+                j.WriteEndObject();
+            }
+            j.WriteEndObject();
+        }
+        return Encoding.UTF8.GetString(buffer.ToArray());
+    }
+
+    private static void Layout(Utf8JsonWriter j, ElementLayout l, Winding w)
+    {
+        j.WriteNumber("elements", l.Count);
+        Number(j, "element_length_m", l.LengthM);
+        Number(j, "element_rise_m", l.RiseM);
+        Number(j, "outer_diameter_m", l.OuterDiameterM);
+        Number(j, "element_axis_radius_m", l.AxisRadiusM);
+        Number(j, "arc_angle_rad", l.ArcAngleRad);
+        Number(j, "pitch_angle_rad", l.PitchAngleRad);
+        j.WriteString("winding", w == Winding.Left ? "left" : "right");
+    }
+
+    private static void Points(Utf8JsonWriter j, string name, IReadOnlyList<FrequencySummary> points)
+    {
+        j.WriteStartArray(name);
+        foreach (var p in points)
+        {
+            j.WriteStartObject();
+            Point(j, p);
+            j.WriteEndObject();
+        }
+        j.WriteEndArray();
+    }
+
+    private static void Point(Utf8JsonWriter j, FrequencySummary p)
+    {
+        Number(j, "frequency_hz", p.FrequencyHz);
+        j.WriteStartArray("impedance_ohm");
+        Value(j, p.ImpedanceOhm.Real);
+        Value(j, p.ImpedanceOhm.Imaginary);
+        j.WriteEndArray();
+        Number(j, "vswr_50", p.Vswr50);
+        Number(j, "axial_ratio_db_worst_wanted_sense", p.WorstScoreDb);
+        Number(j, "axial_ratio_db_mean", p.MeanAxialRatioDb);
+        Number(j, "axial_ratio_db_max", p.WorstAxialRatioDb);
+        j.WriteString("sense", SenseWord(p.Sense));
+        Number(j, "gain_rhcp_dbic", p.GainRhcpDbic);
+        Number(j, "gain_lhcp_dbic", p.GainLhcpDbic);
+    }
+
+    public static string SenseWord(Helipol.Engine.PolarizationSense s) => s switch
+    {
+        Helipol.Engine.PolarizationSense.Rhcp => "RHCP",
+        Helipol.Engine.PolarizationSense.Lhcp => "LHCP",
+        _ => "linear",
+    };
+
+    private static void Number(Utf8JsonWriter j, string name, double? value)
+    {
+        if (value is { } v && double.IsFinite(v)) j.WriteNumber(name, v);
+        else j.WriteNull(name);
+    }
+
+    private static void Value(Utf8JsonWriter j, double v)
+    {
+        if (double.IsFinite(v)) j.WriteNumberValue(v);
+        else j.WriteNullValue();
+    }
+}

@@ -1,0 +1,114 @@
+using System.Text.Json;
+using Helipol.Design;
+using Helipol.Design.Mismatch;
+using Helipol.Model;
+
+namespace Helipol.Tests.Cli;
+
+/// <summary>The solver's verbs: analyze, mismatch, calibrate (sweep, tolerance and build are covered through build).</summary>
+public class DesignVerbTests
+{
+    private static string PinnedCopy(string winding)
+    {
+        var folder = TestPaths.NewTempFolder();
+        var text = File.ReadAllText(Path.Combine(TestPaths.Data, "designs", "practice-foam-tape.yaml"))
+            .Replace("  sense: rhcp\n", $"  sense: rhcp\n  winding: {winding}\n");
+        var path = Path.Combine(folder, "pinned.yaml");
+        File.WriteAllText(path, text);
+        return path;
+    }
+
+    // The JSON shape issue 3 fixes (more fields may follow).
+    [Fact]
+    public void AnalyzeJsonHasTheAgreedShape()
+    {
+        var run = CliRun.Of("analyze", PinnedCopy("left"), "--from", "5.7GHz", "--to", "5.9GHz", "--points", "3", "--json");
+        Assert.Equal(0, run.ExitCode);
+        using var doc = JsonDocument.Parse(run.Out);
+        var root = doc.RootElement;
+        Assert.Equal("practice-foam-tape", root.GetProperty("name").GetString());
+        Assert.Equal(16, root.GetProperty("element_length_mm").GetDouble(), 9);
+        Assert.Equal(12.7, root.GetProperty("element_rise_mm").GetDouble(), 9);
+        Assert.Equal("left", root.GetProperty("winding").GetString());
+        var points = root.GetProperty("points");
+        Assert.Equal(3, points.GetArrayLength());
+        var p = points[1];
+        Assert.Equal(5.8e9, p.GetProperty("frequency_hz").GetDouble(), 0);
+        Assert.Equal(2, p.GetProperty("impedance_ohm").GetArrayLength());
+        Assert.True(p.GetProperty("vswr_50").GetDouble() >= 1);
+        var cut = p.GetProperty("cut");
+        Assert.Equal(0, cut.GetProperty("elevation_deg").GetDouble());
+        Assert.True(cut.GetProperty("axial_ratio_db_mean").GetDouble() <= cut.GetProperty("axial_ratio_db_max").GetDouble());
+        Assert.Contains(cut.GetProperty("sense").GetString(), new[] { "RHCP", "LHCP" });
+        Assert.True(cut.TryGetProperty("gain_rhcp_dbic", out _) && cut.TryGetProperty("gain_lhcp_dbic", out _));
+    }
+
+    [Fact]
+    public void AnalyzeRefusesAnAutoGeometryWithOneLineAndExitTwo()
+    {
+        var design = Path.Combine(TestPaths.Designs, "telemetry-915.yaml");
+        var run = CliRun.Of("analyze", design);
+        Assert.Equal(2, run.ExitCode);
+        Assert.Equal("", run.Out);
+        Assert.Matches(@"^.+telemetry-915\.yaml:\d+:\d+: polarizer\.element_length: found auto, allowed a pinned value", run.FirstErrorLine);
+        var winding = CliRun.Of("analyze", Path.Combine(TestPaths.Data, "designs", "practice-foam-tape.yaml"));
+        Assert.Equal(2, winding.ExitCode);
+        Assert.Contains("polarizer.winding: found auto", winding.FirstErrorLine);
+    }
+
+    // A linear whip against a CP partner loses about 3 dB (common practice, no source); the
+    // polarization loss factor of linear against circular is 1/2 = 3.01 dB (Balanis §2.12.2).
+    [Fact]
+    public void MismatchOfALinearWhipAgainstCircularIsThreeDecibels()
+    {
+        var run = CliRun.Of("mismatch", "linear", "rhcp");
+        Assert.Equal(0, run.ExitCode);
+        Assert.Contains("loss factor 0.5 (3.01 dB loss)", run.Out);
+        var bad = CliRun.Of("mismatch", "rhcp:1.5", "linear");
+        Assert.Equal(2, bad.ExitCode);
+    }
+
+    // Round trip: a measured best-AR frequency taken from the model at a known factor is fitted back
+    // to that factor, and the file written is read back with the same number.
+    [Fact]
+    public void CalibrateFitsTheFactorThatPutsTheBestAxialRatioWhereItWasMeasured()
+    {
+        var path = PinnedCopy("left");
+        var design = DesignResolver.ReadFile(path);
+        double measured = CalibrationFit.BestArFrequencyHz(design, 6.0);
+        var output = Path.Combine(Path.GetDirectoryName(path)!, "cal", "fitted.yaml");
+        var run = CliRun.Of("calibrate", path, "--best-at", FormattableString.Invariant($"{measured / 1e9:0.#####}GHz"), "-o", output);
+        Assert.Equal(0, run.ExitCode);
+        var cal = CalibrationFile.Read(output);
+        Assert.Equal(6.0, cal.Factor, 1);
+        Assert.Equal("eps-foam + pvc-tape", cal.MaterialSet);
+        var reach = CliRun.Of("calibrate", path, "--best-at", "9GHz", "-o", output + ".x");
+        Assert.Equal(2, reach.ExitCode);
+        Assert.False(File.Exists(output + ".x"));
+    }
+
+    [Fact]
+    public void CalibrationFileErrorsNameTheLineAndKey()
+    {
+        var folder = TestPaths.NewTempFolder();
+        var bad = Path.Combine(folder, "bad.yaml");
+        File.WriteAllText(bad, "material_set: foam\nloading_factor: lots\n");
+        var ex = Assert.Throws<CalibrationException>(() => CalibrationFile.Read(bad, "bad.yaml"));
+        Assert.Equal("bad.yaml:2:17: loading_factor: found 'lots', allowed a number from 0 to 1000", ex.Message);
+    }
+
+    [Fact]
+    public void ABadCalibrationFileReferencedByADesignIsBadInput()
+    {
+        var folder = TestPaths.NewTempFolder();
+        Directory.CreateDirectory(Path.Combine(folder, "cal"));
+        File.WriteAllText(Path.Combine(folder, "cal", "bad.yaml"), "loading_factor: -2\n");
+        var text = File.ReadAllText(Path.Combine(TestPaths.Data, "designs", "practice-foam-tape.yaml"))
+            .Replace("  sense: rhcp\n", "  sense: rhcp\n  winding: left\n") + "calibration: cal/bad.yaml\n";
+        var design = Path.Combine(folder, "d.yaml");
+        File.WriteAllText(design, text);
+        var run = CliRun.Of("analyze", design, "--freq", "5.8GHz");
+        Assert.Equal(2, run.ExitCode);
+        Assert.EndsWith("bad.yaml:1:17: loading_factor: found '-2', allowed a number from 0 to 1000", run.FirstErrorLine);
+    }
+}

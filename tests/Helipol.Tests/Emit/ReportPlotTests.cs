@@ -1,0 +1,33 @@
+using Helipol.Design;
+using Helipol.Emit.Report;
+using Helipol.Model;
+
+namespace Helipol.Tests.Emit;
+
+public class ReportPlotTests
+{
+    // Same results, same bytes: the report plots carry no date and use fixed sizes (PNG signature
+    // and IHDR size per the PNG specification, ISO/IEC 15948 §5.2 and §11.2.2).
+    [Fact]
+    public void PolarPlotIsAPngOfFixedSizeAndRepeatsByteForByte()
+    {
+        var angles = Enumerable.Range(0, 72).Select(i => i * 5.0).ToArray();
+        var cut = new PatternCut("azimuth", 5.8e9, angles, angles.Select(a => 2 * Math.Cos(a * Math.PI / 180)).ToArray(), angles.Select(_ => -6.0).ToArray());
+        var a = ReportPlots.Polar(cut, "test");
+        var b = ReportPlots.Polar(cut, "test");
+        Assert.Equal(a, b);
+        Assert.Equal(new byte[] { 0x89, 0x50, 0x4E, 0x47, 0x0D, 0x0A, 0x1A, 0x0A }, a.Take(8).ToArray());
+        int width = (a[16] << 24) | (a[17] << 16) | (a[18] << 8) | a[19];
+        int height = (a[20] << 24) | (a[21] << 16) | (a[22] << 8) | a[23];
+        Assert.Equal((ReportPlots.PolarSize, ReportPlots.PolarSize), (width, height));
+    }
+
+    [Fact]
+    public void HeatMapLeavesUnbuildableCellsBlankAndRepeats()
+    {
+        var values = new double[3, 2] { { 10, double.NaN }, { 4, 6 }, { 12, 20 } };
+        var map = new AxialRatioMap(3, 28e-3, new[] { 18e-3, 20e-3, 22e-3 }, new[] { 10e-3, 12e-3 }, values, new Winding[3, 2]);
+        Assert.Equal(ReportPlots.AxialRatioMap(map, 20e-3, 10e-3, "t"), ReportPlots.AxialRatioMap(map, 20e-3, 10e-3, "t"));
+        Assert.Equal((1, 0), map.Best());
+    }
+}
