@@ -14,33 +14,27 @@ namespace Helipol.Cli.Verbs;
 
 /// <summary>
 /// <c>helipol analyze FILE [--freq F | --from F1 --to F2 --points N] [--elevation DEG] [--json]</c>:
-/// evaluates the geometry pinned in the file (no search): impedance, VSWR against 50 Ω and, on a
+/// evaluates the geometry written in the file (no search; auto keys at practice scaling, labelled): impedance, VSWR against 50 Ω and, on a
 /// cone at the given elevation every 5° of azimuth, mean and worst AR, sense and circular gains.
 /// </summary>
 public static class AnalyzeVerb
 {
     public static Command Create(CliConsole console)
     {
-        var file = new Argument<string>("FILE") { Description = "design file (.yaml) with element_length, element_rise and winding pinned" };
+        var file = new Argument<string>("FILE") { Description = "design file (.yaml); auto lengths are evaluated at practice scaling, an auto winding at the better of the two" };
         var freq = new Option<string>("--freq") { Description = "one frequency, e.g. 5.8GHz" };
         var from = new Option<string>("--from") { Description = "first frequency of a sweep" };
         var to = new Option<string>("--to") { Description = "last frequency of a sweep" };
         var points = new Option<int>("--points") { Description = "frequencies from --from to --to", DefaultValueFactory = _ => 11 };
         var elevation = new Option<string>("--elevation") { Description = "cone elevation above the horizon, e.g. 20deg (default 0 for a dipole, 20 for a monopole)" };
         var json = new Option<bool>("--json") { Description = "print JSON" };
-        var command = new Command("analyze", "Evaluate the pinned geometry of a design: impedance, VSWR, axial ratio, sense and gains per frequency.")
+        var command = new Command("analyze", "Evaluate the geometry written in a design (no search): impedance, VSWR, axial ratio, sense and gains per frequency.")
             { file, freq, from, to, points, elevation, json };
         command.SetAction(parse =>
         {
             var designs = DesignLoader.LoadAll(new[] { parse.GetValue(file)! }, console);
             if (designs is null) return ExitCodes.BadInput;
             var design = designs[0];
-            var build = SolveRunner.PinnedBuild(design, out var pinnedError);
-            if (build is null)
-            {
-                console.Error.WriteLine(pinnedError);
-                return ExitCodes.BadInput;
-            }
             var freqs = Frequencies(design, parse.GetValue(freq), parse.GetValue(from), parse.GetValue(to), parse.GetValue(points), out var problem);
             double elevationRad = AnalysisCone.DefaultElevationRad(design.Whip.Kind);
             if (problem is null && parse.GetValue(elevation) is { } e)
@@ -56,8 +50,12 @@ public static class AnalyzeVerb
             }
             var cone = ObservationSet.Cone(elevationRad, 5 * Math.PI / 180);
             IReadOnlyList<FrequencySummary> result;
+            PolarizerBuild build;
+            IReadOnlyList<string> practiceKeys;
+            bool windingChosen;
             try
             {
+                build = SolveRunner.AnalysisBuild(design, cone, out practiceKeys, out windingChosen);
                 result = PolarizerEvaluator.Evaluate(build, freqs!, cone, design.Polarizer.Sense);
             }
             catch (ModelException ex)
@@ -65,8 +63,15 @@ public static class AnalyzeVerb
                 console.Error.WriteLine($"{design.SourceFile}: polarizer: found a geometry the field model refuses ({ex.Message}), allowed wires that do not touch and are thin enough");
                 return ExitCodes.BadInput;
             }
-            if (parse.GetValue(json)) console.Out.Write(Json(design, build, elevationRad, result));
-            else Table(console, design, build, elevationRad, result);
+            if (parse.GetValue(json)) console.Out.Write(Json(design, build, elevationRad, result, practiceKeys, windingChosen));
+            else
+            {
+                Table(console, design, build, elevationRad, result);
+                if (practiceKeys.Count > 0)
+                    console.Out.WriteLine($"{string.Join(", ", practiceKeys)}: auto in the file, evaluated at practice scaling (not solved; run 'helipol solve' to choose).");
+                if (windingChosen)
+                    console.Out.WriteLine("polarizer.winding: auto in the file; the winding that radiates the wanted sense better at the band centre was taken.");
+            }
             return ExitCodes.Ok;
         });
         return command;
@@ -107,7 +112,8 @@ public static class AnalyzeVerb
         return freqs;
     }
 
-    private static string Json(PolarizerDesign design, PolarizerBuild build, double elevationRad, IReadOnlyList<FrequencySummary> result)
+    private static string Json(PolarizerDesign design, PolarizerBuild build, double elevationRad, IReadOnlyList<FrequencySummary> result,
+        IReadOnlyList<string> practiceKeys, bool windingChosen)
     {
         using var buffer = new MemoryStream();
         using (var j = new Utf8JsonWriter(buffer, new JsonWriterOptions { Indented = false, Encoder = JavaScriptEncoder.UnsafeRelaxedJsonEscaping }))
@@ -141,6 +147,11 @@ public static class AnalyzeVerb
             j.WriteNumber("elements", build.ElementCount);
             j.WriteNumber("outer_diameter_mm", build.OuterDiameterM * 1e3);
             j.WriteNumber("calibration_factor", build.Surroundings.CalibrationFactor);
+            // Keys left auto in the file and evaluated at practice scaling: never a solved result.
+            j.WriteStartArray("practice_scaled_keys");
+            foreach (var k in practiceKeys) j.WriteStringValue(k);
+            j.WriteEndArray();
+            j.WriteBoolean("winding_chosen", windingChosen);
             j.WriteEndObject();
         }
         return Encoding.UTF8.GetString(buffer.ToArray()) + "\n";

@@ -2,6 +2,7 @@ using System.CommandLine;
 using Helipol.Design;
 using Helipol.Emit;
 using Helipol.Emit.Report;
+using Helipol.Geometry.FromModel;
 using Helipol.Model;
 using Helipol.Spec;
 
@@ -18,7 +19,7 @@ public static class BuildVerb
     {
         var files = new Argument<string[]>("FILE") { Description = "design files (.yaml)", Arity = ArgumentArity.OneOrMore };
         var outputDir = new Option<string>("--output", "-o") { Description = "folder that receives one sub-folder per design", DefaultValueFactory = _ => "output" };
-        var command = new Command("build", "Check and solve designs, then write output/<name>/: design.json, report.md and plots.") { files, outputDir };
+        var command = new Command("build", "Check and solve designs, then write output/<name>/: design.json, report.md, plots and the fabrication files.") { files, outputDir };
         command.SetAction(parse =>
         {
             var designs = DesignLoader.LoadAll(parse.GetValue(files)!, console);
@@ -47,7 +48,19 @@ public static class BuildVerb
                 }
                 var sweep = BandSweep.Run(design, solved.Build, counter: counter);
                 var tolerance = ToleranceAnalysis.Run(design, solved.Build, counter: counter);
-                results.Add((design, ReportFiles.Make(design, solved, sweep, tolerance), counter.Count));
+                var report = ReportFiles.Make(design, solved, sweep, tolerance);
+                IReadOnlyList<FabricationFile> fabrication;
+                try
+                {
+                    fabrication = FabricationFiles(design, solved, sweep, tolerance, report);
+                }
+                catch (ArgumentException ex)
+                {
+                    // The geometry refuses what cannot be made (a ring larger than the board, ...).
+                    console.Error.WriteLine($"{design.SourceFile}: fabrication: {ex.Message}");
+                    return ExitCodes.BadInput;
+                }
+                results.Add((design, [.. report, .. fabrication.Select(f => (f.FileName, f.Bytes))], counter.Count));
             }
             var root = parse.GetValue(outputDir)!;
             foreach (var (design, made, solves) in results)
@@ -59,5 +72,15 @@ public static class BuildVerb
             return ExitCodes.Ok;
         });
         return command;
+    }
+
+    /// <summary>The fabrication set for the solved layout; the packet carries the report's main plots.</summary>
+    private static IReadOnlyList<FabricationFile> FabricationFiles(PolarizerDesign design, SolvedPolarizer solved, SweepResult sweep,
+        ToleranceResult tolerance, IReadOnlyList<(string Name, byte[] Bytes)> report)
+    {
+        string[] packetPlots = ["ar-gain.png", "pattern-azimuth.png", "pattern-elevation.png"];
+        var plots = packetPlots.Select(n => report.First(r => r.Name == n).Bytes).ToList();
+        var input = BuildInputFromModel.Create(design, solved.Layout, solved.Winding, PacketSummary.Lines(design, solved, sweep, tolerance), plots);
+        return FabricationSet.Render(input);
     }
 }

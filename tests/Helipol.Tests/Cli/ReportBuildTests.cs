@@ -1,9 +1,13 @@
 namespace Helipol.Tests.Cli;
 
-/// <summary>build writes the report and its plots beside design.json, byte for byte the same on every run.</summary>
+/// <summary>build writes the report, its plots and the fabrication set beside design.json, byte for byte the same on every run.</summary>
 public class ReportBuildTests
 {
-    private static readonly string[] Expected = { "ar-gain.png", "ar-map.png", "design.json", "pattern-azimuth.png", "pattern-elevation.png", "report.md", "vswr.png" };
+    private static readonly string[] Expected =
+    {
+        "ar-gain.png", "ar-map.png", "bend-sheet.pdf", "bend-sheet.png", "design.json", "drill.dxf", "former.3mf", "former.stl",
+        "jig.stl", "packet.pdf", "pattern-azimuth.png", "pattern-elevation.png", "report.md", "rings.dxf", "vswr.png",
+    };
 
     [Fact]
     public void BuildWritesTheReportAndPlotsIdenticallyTwice()
