@@ -4,8 +4,9 @@ DOTNET ?= dotnet
 CONFIG ?= Release
 CLI_DLL := src/Helipol.Cli/bin/$(CONFIG)/net10.0/helipol.dll
 DESIGNS := $(sort $(wildcard designs/*.yaml))
-# Outside readers the tests use (Debian packages): ezdxf for DXF, admesh for STL, poppler for PDF pages.
-APT_PACKAGES := python3-ezdxf admesh poppler-utils
+# Outside readers the tests use (Debian packages): ezdxf for DXF, admesh for STL, poppler for PDF pages,
+# nec2c (NEC-2) as an independent field solver for the engine.
+APT_PACKAGES := python3-ezdxf admesh poppler-utils nec2c
 
 .PHONY: all build run test bench deps clean schema
 
