@@ -6,7 +6,7 @@ using Helipol.Model;
 namespace Helipol.Bench;
 
 /// <summary>
-/// The polarizer solver's figures (issue 4): wall time and field solves for solving each demo
+/// The polarizer solver's figures: wall time and field solves for solving each demo
 /// design, and for a 500-build Monte Carlo. Each is run a few times; the median and the minimum
 /// are printed. Targets: one design ≤ 2 s, 500 builds ≤ 5 s, on this 2-core machine.
 /// </summary>

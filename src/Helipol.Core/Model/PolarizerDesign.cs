@@ -25,7 +25,7 @@ public sealed record PolarizerDesign(
 /// <summary>Band edges in Hz. <see cref="EdgesGiven"/> is false when low/high were defaulted to ±1.5 % of center.</summary>
 public sealed record Band(double CenterHz, double LowHz, double HighHz, bool EdgesGiven)
 {
-    /// <summary>Default half-width of the band when the file gives only the center (issue-agreed default).</summary>
+    /// <summary>Default half-width of the band when the file gives only the center (the project's stated default).</summary>
     public const double DefaultHalfWidthFraction = 0.015;
 
     /// <summary>Free-space wavelength at the centre, λ = c/f.</summary>

@@ -18,7 +18,7 @@ public class DesignVerbTests
         return path;
     }
 
-    // The JSON shape issue 3 fixes (more fields may follow).
+    // The agreed JSON shape of analyze (more fields may follow).
     [Fact]
     public void AnalyzeJsonHasTheAgreedShape()
     {
@@ -43,7 +43,7 @@ public class DesignVerbTests
         Assert.True(cut.TryGetProperty("gain_rhcp_dbic", out _) && cut.TryGetProperty("gain_lhcp_dbic", out _));
     }
 
-    // Issue 3: analyze works for every demo design. Keys left auto are evaluated at practice scaling
+    // analyze works for every demo design. Keys left auto are evaluated at practice scaling
     // and named as such, so a practice value is never passed off as solved.
     [Fact]
     public void AnalyzeEvaluatesEveryDemoAndNamesThePracticeScaledKeys()
