@@ -80,11 +80,11 @@ public static class DesignKeys
     private static readonly MappingField Board = new(false,
         F("width", Length(10, 3000), "foam board width") with { Default = "300 mm" },
         F("height", Length(10, 3000), "foam board height") with { Default = "200 mm" },
-        F("thickness", Length(1, 200), "foam board thickness") with { Default = "38 mm" });
+        F("thickness", Length(1, 200), "foam board thickness (best equal to one ring's thickness)") with { Default = "38 mm" });
 
     private static readonly MappingField Fabrication = new(false,
         F("kerf", Length(0, 5, minInclusive: true), "width of the cut (laser, wire or blade), compensated in cut contours") with { Default = "0.2 mm" },
-        F("rings", new IntegerField(1, 50), "number of foam rings nested on the board") with { Default = "6" },
+        F("rings", new IntegerField(1, 50), "number of foam rings stacked to make the former, each (former height / rings) thick") with { Default = "6" },
         F("board", Board, "foam board the rings are cut from"),
         F("print_clearance", Length(0, 2, minInclusive: true), "extra room added to printed bores and grooves") with { Default = "0.2 mm" },
         F("paper", new ChoiceField("a4", "letter"), "paper size of the bend sheet") with { Default = "a4" },

@@ -25,7 +25,8 @@ public class BuildInputFromModelTests
         Assert.Equal(CircularSense.Rhcp, input.Sense);
         Assert.Equal(HelixWinding.Left, input.Winding);
         Assert.Equal(5, input.ElementCount);
-        Assert.Equal(6, input.RingCount);
+        Assert.Equal(1, input.RingCount);
+        Assert.Equal(19.0, input.BoardThicknessMm, 9);
     }
 
     [Fact]
