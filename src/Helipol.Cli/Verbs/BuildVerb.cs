@@ -37,15 +37,7 @@ public static class BuildVerb
             {
                 var counter = new FieldSolveCounter();
                 SolvedPolarizer solved;
-                try
-                {
-                    solved = SolveRunner.Solve(console, design, counter);
-                }
-                catch (SearchException ex)
-                {
-                    console.Error.WriteLine($"{design.SourceFile}: polarizer: found {ex.Message}, allowed a search range with buildable geometry (widen solve.search or the former)");
-                    return ExitCodes.BadInput;
-                }
+                solved = SolveRunner.Solve(console, design, counter);
                 var sweep = BandSweep.Run(design, solved.Build, counter: counter);
                 var tolerance = ToleranceAnalysis.Run(design, solved.Build, counter: counter);
                 var report = ReportFiles.Make(design, solved, sweep, tolerance);
@@ -60,7 +52,13 @@ public static class BuildVerb
                     console.Error.WriteLine($"{design.SourceFile}: fabrication: {ex.Message}");
                     return ExitCodes.BadInput;
                 }
-                results.Add((design, [.. report, .. fabrication.Select(f => (f.FileName, f.Bytes))], counter.Count));
+                IReadOnlyList<(string Name, byte[] Bytes)> made = [.. report, .. fabrication.Select(f => (f.FileName, f.Bytes))];
+                if (NonFiniteGuard.Find(made) is { } bad)
+                {
+                    console.Error.WriteLine($"helipol: internal error: {design.Name}/{bad.File} would carry a non-finite number ({bad.Token}); nothing written");
+                    return ExitCodes.Failure;
+                }
+                results.Add((design, made, counter.Count));
             }
             var root = parse.GetValue(outputDir)!;
             foreach (var (design, made, solves) in results)

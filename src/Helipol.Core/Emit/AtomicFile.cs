@@ -1,39 +1,92 @@
+using System.Globalization;
+
 namespace Helipol.Emit;
 
 /// <summary>
 /// Writes a file so that a reader sees either the old bytes or the new bytes, never a mix:
 /// the bytes go to a temporary file in the same folder, are flushed to disk, then renamed over
-/// the target (rename within one file system is atomic on POSIX).
+/// the target (rename within one file system is atomic on POSIX, rename(2)). A failed write
+/// (full disk, no permission) removes the temporary file and raises <see cref="OutputWriteException"/>.
 /// </summary>
 public static class AtomicFile
 {
+    /// <summary>
+    /// Test hook: milliseconds to sleep after the temporary file is complete and before it is
+    /// renamed over the target. Lets a test kill the process mid-write and find the target intact.
+    /// </summary>
+    public const string PauseVariable = "HELIPOL_TEST_PAUSE_MS";
+
+    private static readonly AsyncLocal<Func<Stream, Stream>?> WrapStream = new();
+
+    /// <summary>
+    /// Test hook: wraps the temporary file's stream for the calling flow only (e.g. with a stream
+    /// that fails like a full disk). Dispose the result to remove the hook.
+    /// </summary>
+    public static IDisposable InterceptWrites(Func<Stream, Stream> wrap)
+    {
+        var previous = WrapStream.Value;
+        WrapStream.Value = wrap;
+        return new Restore(() => WrapStream.Value = previous);
+    }
+
     public static void WriteAllBytes(string path, ReadOnlySpan<byte> bytes)
     {
         var full = Path.GetFullPath(path);
         var folder = Path.GetDirectoryName(full) ?? ".";
-        Directory.CreateDirectory(folder);
         var temp = Path.Combine(folder, "." + Path.GetFileName(full) + ".partial-" + Environment.ProcessId);
         try
         {
-            using (var stream = new FileStream(temp, FileMode.Create, FileAccess.Write, FileShare.None))
+            Directory.CreateDirectory(folder);
+            using (var file = new FileStream(temp, FileMode.Create, FileAccess.Write, FileShare.None))
+            using (var stream = WrapStream.Value?.Invoke(file) ?? file)
             {
                 stream.Write(bytes);
-                stream.Flush(flushToDisk: true);
+                stream.Flush();
+                file.Flush(flushToDisk: true);
             }
+            PauseForTest();
             File.Move(temp, full, overwrite: true);
         }
-        catch
+        catch (Exception ex) when (ex is IOException or UnauthorizedAccessException)
         {
             TryDelete(temp);
-            throw;
+            throw new OutputWriteException(full, ex);
         }
     }
 
     public static void WriteAllText(string path, string text) =>
         WriteAllBytes(path, new System.Text.UTF8Encoding(encoderShouldEmitUTF8Identifier: false).GetBytes(text));
 
+    private static void PauseForTest()
+    {
+        var value = Environment.GetEnvironmentVariable(PauseVariable);
+        if (value is not null && int.TryParse(value, NumberStyles.None, CultureInfo.InvariantCulture, out var ms) && ms > 0)
+            Thread.Sleep(ms);
+    }
+
     private static void TryDelete(string path)
     {
         try { File.Delete(path); } catch (IOException) { } catch (UnauthorizedAccessException) { }
+    }
+
+    private sealed class Restore(Action undo) : IDisposable
+    {
+        public void Dispose() => undo();
+    }
+}
+
+/// <summary>An output file could not be written (full disk, no permission, a file where a folder should be).</summary>
+public sealed class OutputWriteException(string path, Exception inner)
+    : IOException($"cannot write {path}: {Reason(inner)}", inner)
+{
+    public string Path { get; } = path;
+
+    /// <summary>The system's reason without the path it repeats (the path is already in front).</summary>
+    private static string Reason(Exception ex)
+    {
+        var message = ex.Message;
+        var cut = message.IndexOf(" : '", StringComparison.Ordinal);
+        if (cut < 0) cut = message.IndexOf(" '", StringComparison.Ordinal) is var c && c > 0 && message.EndsWith('\'') ? c : -1;
+        return (cut > 0 ? message[..cut] : message).TrimEnd('.', ' ');
     }
 }
