@@ -61,10 +61,10 @@ public static class BuildVerb
                 results.Add((design, made, counter.Count));
             }
             var root = parse.GetValue(outputDir)!;
+            // Every file of every design is staged before any is renamed into place (AtomicFile.WriteAll).
+            AtomicFile.WriteAll(results.SelectMany(r => r.Files.Select(f => (Path.Combine(root, r.Design.Name, f.Name), f.Bytes))).ToList());
             foreach (var (design, made, solves) in results)
             {
-                foreach (var (name, bytes) in made)
-                    AtomicFile.WriteAllBytes(Path.Combine(root, design.Name, name), bytes);
                 console.Out.WriteLine($"wrote {Path.Combine(root, design.Name)}/ ({string.Join(", ", made.Select(m => m.Name))}; {solves} field solves)");
             }
             return ExitCodes.Ok;

@@ -11,8 +11,8 @@ namespace Helipol.Emit;
 public static class AtomicFile
 {
     /// <summary>
-    /// Test hook: milliseconds to sleep after the temporary file is complete and before it is
-    /// renamed over the target. Lets a test kill the process mid-write and find the target intact.
+    /// Test hook: milliseconds to sleep after the temporary files are complete and before they are
+    /// renamed over their targets. Lets a test kill the process mid-write and find the targets intact.
     /// </summary>
     public const string PauseVariable = "HELIPOL_TEST_PAUSE_MS";
 
@@ -29,28 +29,45 @@ public static class AtomicFile
         return new Restore(() => WrapStream.Value = previous);
     }
 
-    public static void WriteAllBytes(string path, ReadOnlySpan<byte> bytes)
+    public static void WriteAllBytes(string path, ReadOnlySpan<byte> bytes) => WriteAll([(path, bytes.ToArray())]);
+
+    /// <summary>
+    /// Writes a set of files in two phases: every temporary file is written and flushed first, and
+    /// only when all are on disk are they renamed over their targets. A failure in the first phase
+    /// (full disk, no permission) removes the temporary files and leaves every target as it was.
+    /// </summary>
+    public static void WriteAll(IReadOnlyList<(string Path, byte[] Bytes)> files)
     {
-        var full = Path.GetFullPath(path);
-        var folder = Path.GetDirectoryName(full) ?? ".";
-        var temp = Path.Combine(folder, "." + Path.GetFileName(full) + ".partial-" + Environment.ProcessId);
+        var staged = new List<(string Temp, string Full)>();
+        string current = "";
         try
         {
-            Directory.CreateDirectory(folder);
-            using (var file = new FileStream(temp, FileMode.Create, FileAccess.Write, FileShare.None))
-            using (var stream = WrapStream.Value?.Invoke(file) ?? file)
+            foreach (var (path, bytes) in files)
             {
-                stream.Write(bytes);
-                stream.Flush();
-                file.Flush(flushToDisk: true);
+                current = Path.GetFullPath(path);
+                var folder = Path.GetDirectoryName(current) ?? ".";
+                var temp = Path.Combine(folder, "." + Path.GetFileName(current) + ".partial-" + Environment.ProcessId);
+                Directory.CreateDirectory(folder);
+                staged.Add((temp, current));
+                using (var file = new FileStream(temp, FileMode.Create, FileAccess.Write, FileShare.None))
+                using (var stream = WrapStream.Value?.Invoke(file) ?? file)
+                {
+                    stream.Write(bytes);
+                    stream.Flush();
+                    file.Flush(flushToDisk: true);
+                }
             }
             PauseForTest();
-            File.Move(temp, full, overwrite: true);
+            foreach (var (temp, full) in staged)
+            {
+                current = full;
+                File.Move(temp, full, overwrite: true);
+            }
         }
         catch (Exception ex) when (ex is IOException or UnauthorizedAccessException)
         {
-            TryDelete(temp);
-            throw new OutputWriteException(full, ex);
+            foreach (var (temp, _) in staged) TryDelete(temp);
+            throw new OutputWriteException(current, ex);
         }
     }
 
