@@ -35,6 +35,11 @@ public static class CheckVerb
                     foreach (var problem in ex.Errors) console.Error.WriteLine(problem.ToString());
                     bad = true;
                 }
+                catch (Helipol.Design.CalibrationException ex)
+                {
+                    console.Error.WriteLine(ex.Message);
+                    bad = true;
+                }
             }
             return bad ? ExitCodes.BadInput : ExitCodes.Ok;
         });
