@@ -63,6 +63,13 @@ public static class CliApp
             error.WriteLine(ex.Message);
             return ExitCodes.BadInput;
         }
+        catch (Helipol.Engine.ModelException ex)
+        {
+            // A geometry the field model refuses after the guards (e.g. at the top of a sweep) is
+            // still a property of the design, not of the machine.
+            error.WriteLine($"helipol: found a geometry the field model refuses ({OneLine(ex.Message)}), allowed wires that do not touch and are thin enough");
+            return ExitCodes.BadInput;
+        }
         catch (Helipol.Design.CalibrationException ex)
         {
             // A design's calibration file is input too: one line, exit 2, nothing written.
