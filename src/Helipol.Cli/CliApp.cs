@@ -5,15 +5,33 @@ namespace Helipol.Cli;
 
 /// <summary>
 /// Builds the command tree and runs it. Exit codes: 0 ok, 1 runtime failure (I/O, internal),
-/// 2 bad input (design file or command line). Errors are one line on stderr, never a stack trace.
+/// 2 bad input (design file or command line). Errors are one line on stderr, never a stack trace
+/// (unless HELIPOL_DEBUG=1, which adds it after the line for a developer).
+/// HELIPOL_THREADS=N caps every parallel loop at N worker threads; outputs are the same bits for any N.
 /// </summary>
 public static class CliApp
 {
+    /// <summary>Cap on worker threads (a positive integer); unset means one per processor.</summary>
+    public const string ThreadsVariable = "HELIPOL_THREADS";
+
+    /// <summary>Set to 1 to print the stack trace of an unexpected failure after its one line.</summary>
+    public const string DebugVariable = "HELIPOL_DEBUG";
+
     public static int Run(string[] args) => Run(args, Console.Out, Console.Error);
 
     /// <summary>Runs with the given writers; tests call this in-process.</summary>
     public static int Run(string[] args, TextWriter output, TextWriter error)
     {
+        var threads = Environment.GetEnvironmentVariable(ThreadsVariable);
+        if (!string.IsNullOrEmpty(threads))
+        {
+            if (!int.TryParse(threads, System.Globalization.NumberStyles.None, System.Globalization.CultureInfo.InvariantCulture, out var n) || n < 1)
+            {
+                error.WriteLine($"helipol: {ThreadsVariable}: found '{threads}', allowed a whole number of threads ≥ 1");
+                return ExitCodes.BadInput;
+            }
+            Helipol.Engine.Parallelism.MaxDegree = n;
+        }
         var console = new CliConsole(output, error);
         var root = new RootCommand("helipol: designs parasitic helical polarizers that make a linear whip antenna circularly polarized, and writes the files to build them.");
         root.Subcommands.Add(CheckVerb.Create(console));
@@ -40,6 +58,18 @@ public static class CliApp
         {
             return parsed.Invoke(new InvocationConfiguration { Output = output, Error = error, EnableDefaultExceptionHandler = false });
         }
+        catch (DesignRefusedException ex)
+        {
+            error.WriteLine(ex.Message);
+            return ExitCodes.BadInput;
+        }
+        catch (Helipol.Engine.ModelException ex)
+        {
+            // A geometry the field model refuses after the guards (e.g. at the top of a sweep) is
+            // still a property of the design, not of the machine.
+            error.WriteLine($"helipol: found a geometry the field model refuses ({OneLine(ex.Message)}), allowed wires that do not touch and are thin enough");
+            return ExitCodes.BadInput;
+        }
         catch (Helipol.Design.CalibrationException ex)
         {
             // A design's calibration file is input too: one line, exit 2, nothing written.
@@ -48,14 +78,23 @@ public static class CliApp
         }
         catch (Exception ex) when (ex is IOException or UnauthorizedAccessException)
         {
-            error.WriteLine($"helipol: {ex.Message}");
+            error.WriteLine($"helipol: {OneLine(ex.Message)}");
+            Debug(error, ex);
             return ExitCodes.Failure;
         }
         catch (Exception ex)
         {
-            error.WriteLine($"helipol: internal error: {ex.GetType().Name}: {ex.Message}");
+            error.WriteLine($"helipol: internal error: {ex.GetType().Name}: {OneLine(ex.Message)}");
+            Debug(error, ex);
             return ExitCodes.Failure;
         }
+    }
+
+    private static string OneLine(string message) => message.ReplaceLineEndings(" ");
+
+    private static void Debug(TextWriter error, Exception ex)
+    {
+        if (Environment.GetEnvironmentVariable(DebugVariable) == "1") error.WriteLine(ex.ToString());
     }
 }
 

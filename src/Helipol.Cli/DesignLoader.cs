@@ -3,7 +3,10 @@ using Helipol.Spec;
 
 namespace Helipol.Cli;
 
-/// <summary>Reads and resolves design files for the verbs, printing every problem of a bad file as one line each.</summary>
+/// <summary>
+/// Reads and resolves design files for the verbs, printing every problem of a bad file as one line each;
+/// a geometry the field model would refuse is caught here, before any solve.
+/// </summary>
 public static class DesignLoader
 {
     /// <summary>Loads all files; returns null (after printing the problems) if any is bad.</summary>
@@ -15,7 +18,14 @@ public static class DesignLoader
         {
             try
             {
-                designs.Add(DesignResolver.ReadFile(file, file));
+                var design = DesignResolver.ReadFile(file, file);
+                if (DesignRefusal.LineFor(design) is { } refused)
+                {
+                    console.Error.WriteLine(refused);
+                    bad = true;
+                    continue;
+                }
+                designs.Add(design);
             }
             catch (DesignInputException ex)
             {

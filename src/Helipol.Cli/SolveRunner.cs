@@ -8,7 +8,24 @@ namespace Helipol.Cli;
 /// <summary>Shared by solve, sweep, tolerance and build: solves a design with a progress line on an interactive terminal.</summary>
 public static class SolveRunner
 {
+    /// <summary>Solves, or throws <see cref="DesignRefusedException"/> with one line when the design cannot be solved.</summary>
     public static SolvedPolarizer Solve(CliConsole console, PolarizerDesign design, FieldSolveCounter counter)
+    {
+        try
+        {
+            return SolveOnce(console, design, counter);
+        }
+        catch (SearchException ex)
+        {
+            throw new DesignRefusedException(DesignRefusal.SearchLine(design, ex));
+        }
+        catch (Helipol.Engine.ModelException ex)
+        {
+            throw new DesignRefusedException($"{design.SourceFile}: polarizer: found a geometry the field model refuses ({ex.Message}), allowed wires that do not touch and are thin enough");
+        }
+    }
+
+    private static SolvedPolarizer SolveOnce(CliConsole console, PolarizerDesign design, FieldSolveCounter counter)
     {
         SolvedPolarizer? solved = null;
         if (console.Tables.Profile.Capabilities.Interactive)

@@ -20,14 +20,14 @@ public static class MomSolver
     /// <summary>
     /// Solves every frequency, in parallel over frequencies (each its own matrix), reusing the mesh's
     /// quadrature. Results are in the order of <paramref name="frequenciesHz"/>.
-    /// <paramref name="maxParallelism"/> defaults to the number of processors.
+    /// <paramref name="maxParallelism"/> defaults to <see cref="Parallelism.MaxDegree"/> and never exceeds it.
     /// </summary>
     public static IReadOnlyList<MomSolution> Sweep(MeshedModel mesh, IReadOnlyList<double> frequenciesHz, int? maxParallelism = null)
     {
         ArgumentNullException.ThrowIfNull(frequenciesHz);
         foreach (var f in frequenciesHz) CheckFrequency(mesh, f);
         var results = new MomSolution[frequenciesHz.Count];
-        var options = new ParallelOptions { MaxDegreeOfParallelism = Math.Max(1, maxParallelism ?? Environment.ProcessorCount) };
+        var options = Parallelism.Options(maxParallelism);
         Parallel.For(0, frequenciesHz.Count, options, i => results[i] = Solve(mesh, frequenciesHz[i]));
         return results;
     }

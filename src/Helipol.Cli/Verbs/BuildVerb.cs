@@ -37,15 +37,7 @@ public static class BuildVerb
             {
                 var counter = new FieldSolveCounter();
                 SolvedPolarizer solved;
-                try
-                {
-                    solved = SolveRunner.Solve(console, design, counter);
-                }
-                catch (SearchException ex)
-                {
-                    console.Error.WriteLine($"{design.SourceFile}: polarizer: found {ex.Message}, allowed a search range with buildable geometry (widen solve.search or the former)");
-                    return ExitCodes.BadInput;
-                }
+                solved = SolveRunner.Solve(console, design, counter);
                 var sweep = BandSweep.Run(design, solved.Build, counter: counter);
                 var tolerance = ToleranceAnalysis.Run(design, solved.Build, counter: counter);
                 var report = ReportFiles.Make(design, solved, sweep, tolerance);
@@ -60,13 +52,19 @@ public static class BuildVerb
                     console.Error.WriteLine($"{design.SourceFile}: fabrication: {ex.Message}");
                     return ExitCodes.BadInput;
                 }
-                results.Add((design, [.. report, .. fabrication.Select(f => (f.FileName, f.Bytes))], counter.Count));
+                IReadOnlyList<(string Name, byte[] Bytes)> made = [.. report, .. fabrication.Select(f => (f.FileName, f.Bytes))];
+                if (NonFiniteGuard.Find(made) is { } bad)
+                {
+                    console.Error.WriteLine($"helipol: internal error: {design.Name}/{bad.File} would carry a non-finite number ({bad.Token}); nothing written");
+                    return ExitCodes.Failure;
+                }
+                results.Add((design, made, counter.Count));
             }
             var root = parse.GetValue(outputDir)!;
+            // Every file of every design is staged before any is renamed into place (AtomicFile.WriteAll).
+            AtomicFile.WriteAll(results.SelectMany(r => r.Files.Select(f => (Path.Combine(root, r.Design.Name, f.Name), f.Bytes))).ToList());
             foreach (var (design, made, solves) in results)
             {
-                foreach (var (name, bytes) in made)
-                    AtomicFile.WriteAllBytes(Path.Combine(root, design.Name, name), bytes);
                 console.Out.WriteLine($"wrote {Path.Combine(root, design.Name)}/ ({string.Join(", ", made.Select(m => m.Name))}; {solves} field solves)");
             }
             return ExitCodes.Ok;

@@ -20,6 +20,12 @@ public static class CheckVerb
                 {
                     var doc = SpecReader.ReadFile(file, file);
                     var design = DesignResolver.Resolve(doc);
+                    if (DesignRefusal.LineFor(design, doc) is { } refused)
+                    {
+                        console.Error.WriteLine(refused);
+                        bad = true;
+                        continue;
+                    }
                     var warnings = DesignWarnings.For(doc, design);
                     console.Out.WriteLine($"{file}: ok ({design.Name}){(warnings.Count > 0 ? $", {warnings.Count} warning(s)" : "")}");
                     foreach (var warning in warnings) console.Out.WriteLine(warning.ToString());
@@ -27,6 +33,11 @@ public static class CheckVerb
                 catch (DesignInputException ex)
                 {
                     foreach (var problem in ex.Errors) console.Error.WriteLine(problem.ToString());
+                    bad = true;
+                }
+                catch (Helipol.Design.CalibrationException ex)
+                {
+                    console.Error.WriteLine(ex.Message);
                     bad = true;
                 }
             }

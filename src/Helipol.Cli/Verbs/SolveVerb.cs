@@ -28,15 +28,7 @@ public static class SolveVerb
             var design = designs[0];
             var counter = new FieldSolveCounter();
             SolvedPolarizer solved;
-            try
-            {
-                solved = SolveRunner.Solve(console, design, counter);
-            }
-            catch (SearchException ex)
-            {
-                console.Error.WriteLine($"{design.SourceFile}: polarizer: found {ex.Message}, allowed a search range with buildable geometry (widen solve.search or the former)");
-                return ExitCodes.BadInput;
-            }
+            solved = SolveRunner.Solve(console, design, counter);
             if (parse.GetValue(map) is { } mapFile)
                 Helipol.Emit.AtomicFile.WriteAllBytes(mapFile, ReportPlots.AxialRatioMap(solved.Search.Map, solved.Layout.LengthM, solved.Layout.RiseM, design.Name));
             if (parse.GetValue(json))

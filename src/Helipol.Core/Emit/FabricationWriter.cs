@@ -14,13 +14,8 @@ public static class FabricationWriter
 
     public static IReadOnlyList<string> Write(IReadOnlyList<FabricationFile> files, string folder)
     {
-        var written = new List<string>();
-        foreach (var f in files)
-        {
-            var path = Path.Combine(folder, f.FileName);
-            AtomicFile.WriteAllBytes(path, f.Bytes);
-            written.Add(path);
-        }
-        return written;
+        var staged = files.Select(f => (Path.Combine(folder, f.FileName), f.Bytes)).ToList();
+        AtomicFile.WriteAll(staged);
+        return staged.Select(s => s.Item1).ToList();
     }
 }

@@ -13,7 +13,7 @@ public sealed record DesignWarning(string File, SourceMark Mark, string FieldPat
 /// Soft limits: thin-wire validity (wire radius well below λ, elements long enough for segments
 /// of at least about four radii; Harrington, Field Computation by Moment Methods, ch. 4; Gibson,
 /// The Method of Moments in Electromagnetics, thin-wire chapter), and elements near the edges of
-/// the former or beyond the whip.
+/// the former or beyond the whip, and printed grooves too shallow or too loose for the wire.
 /// </summary>
 public static class DesignWarnings
 {
@@ -22,6 +22,15 @@ public static class DesignWarnings
 
     /// <summary>Eight segments of at least four radii each: the shortest element the model resolves.</summary>
     public const double MinElementLengthOverRadius = 32;
+
+    /// <summary>
+    /// Depth of the printed sleeve's grooves in wire diameters; the sleeve itself is drawn by
+    /// Geometry/FormerSleeve.cs (a test keeps the two equal).
+    /// </summary>
+    public const double GrooveDepthPerWireDiameter = 0.6;
+
+    /// <summary>Shallowest groove a desktop FDM printer forms reliably: about one 0.2 mm layer (common practice, no source).</summary>
+    public const double MinPrintedGrooveDepthMm = 0.2;
 
     public static IReadOnlyList<DesignWarning> For(SpecDocument doc, PolarizerDesign design)
     {
@@ -43,6 +52,14 @@ public static class DesignWarnings
         var margin = (p.Former.HeightM - layout.RiseM) / 2;
         if (margin < p.Wire.DiameterM)
             Warn("polarizer.former.height", $"element ends come within {Mm(Math.Max(0, margin))} of the former's edge (rise {Mm(layout.RiseM)}, height {Mm(p.Former.HeightM)}); glue and tape hold poorly there");
+
+        // The printed sleeve's grooves: deep enough to print, narrow enough to locate the wire.
+        var wireMm = p.Wire.DiameterM * 1e3;
+        var grooveMm = GrooveDepthPerWireDiameter * wireMm;
+        if (grooveMm < MinPrintedGrooveDepthMm)
+            Warn("polarizer.wire.diameter", $"the printed sleeve's grooves would be {grooveMm.ToString("0.###", CultureInfo.InvariantCulture)} mm deep ({GrooveDepthPerWireDiameter} × wire diameter), less than one {MinPrintedGrooveDepthMm.ToString("0.#", CultureInfo.InvariantCulture)} mm print layer; too shallow to hold the wire");
+        if (design.Fabrication.PrintClearanceMm > wireMm / 2)
+            Warn("fabrication.print_clearance", $"grooves {(wireMm + design.Fabrication.PrintClearanceMm).ToString("0.##", CultureInfo.InvariantCulture)} mm wide for a {wireMm.ToString("0.##", CultureInfo.InvariantCulture)} mm wire let it wander more than a quarter diameter either side; the printed sleeve no longer places the element");
 
         var top = p.CentreHeightM + layout.RiseM / 2;
         var bottom = p.CentreHeightM - layout.RiseM / 2;

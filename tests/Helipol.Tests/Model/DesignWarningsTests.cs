@@ -47,3 +47,36 @@ public class DesignWarningsTests
         Assert.Contains(warnings, w => w.FieldPath == "polarizer.centre_height");
     }
 }
+
+public class GrooveWarningTests
+{
+    private static readonly string Ridge = File.ReadAllText(Path.Combine(TestPaths.Designs, "ridge-video-rx.yaml"));
+
+    private static IReadOnlyList<DesignWarning> WarningsOf(string text)
+    {
+        var doc = SpecReader.ReadText(text, "w.yaml", TestPaths.Designs);
+        return DesignWarnings.For(doc, DesignResolver.Resolve(doc));
+    }
+
+    [Fact]
+    public void WarningUsesTheGrooveDepthTheSleeveIsDrawnWith() =>
+        Assert.Equal(Helipol.Geometry.FormerSleeve.GrooveDepthPerWireDiameter, DesignWarnings.GrooveDepthPerWireDiameter);
+
+    [Fact]
+    public void GrooveShallowerThanAPrintLayerIsFlagged()
+    {
+        // 0.3 mm wire: grooves 0.18 mm deep, under one 0.2 mm layer (common practice, no source).
+        var warnings = WarningsOf(Ridge.Replace("wire: { diameter: 0.8 mm", "wire: { diameter: 0.3 mm"));
+        var w = Assert.Single(warnings, w => w.FieldPath == "polarizer.wire.diameter");
+        Assert.Contains("0.18 mm deep", w.Message);
+        // 0.4 mm wire: 0.24 mm, one layer and more: no warning.
+        Assert.DoesNotContain(WarningsOf(Ridge.Replace("wire: { diameter: 0.8 mm", "wire: { diameter: 0.4 mm")), x => x.FieldPath == "polarizer.wire.diameter");
+    }
+
+    [Fact]
+    public void GrooveMuchWiderThanTheWireIsFlagged()
+    {
+        Assert.Contains(WarningsOf(Ridge.Replace("print_clearance: 0.2 mm", "print_clearance: 0.5 mm")), w => w.FieldPath == "fabrication.print_clearance");
+        Assert.DoesNotContain(WarningsOf(Ridge.Replace("print_clearance: 0.2 mm", "print_clearance: 0.4 mm")), w => w.FieldPath == "fabrication.print_clearance");
+    }
+}

@@ -21,10 +21,10 @@ public class BadDesignCorpusTests
     }
 
     [Fact]
-    public void CorpusHasAtLeastFortyFilesEachWithAnExpectedMessage()
+    public void CorpusHasAtLeastSixtyFilesEachWithAnExpectedMessage()
     {
         var files = Directory.GetFiles(BadFolder, "*.yaml");
-        Assert.True(files.Length >= 40, $"only {files.Length} bad designs");
+        Assert.True(files.Length >= 60, $"only {files.Length} bad designs");
         Assert.All(files, f => Assert.True(File.Exists(Path.ChangeExtension(f, ".expected")), f));
     }
 

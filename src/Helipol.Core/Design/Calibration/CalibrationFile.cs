@@ -11,9 +11,11 @@ namespace Helipol.Design;
 /// </summary>
 public static class CalibrationFile
 {
-    public static CoatingCalibration Read(string path, string? shownAs = null)
+    /// <param name="shownAs">the path as the design wrote it (kept in the result's source line)</param>
+    /// <param name="shownInErrors">the path error lines start with, so a user can open it from where helipol ran</param>
+    public static CoatingCalibration Read(string path, string? shownAs = null, string? shownInErrors = null)
     {
-        string shown = shownAs ?? path;
+        string shown = shownInErrors ?? shownAs ?? path;
         var yaml = new YamlStream();
         try
         {
@@ -33,7 +35,7 @@ public static class CalibrationFile
         if (!double.TryParse(written, NumberStyles.Float, CultureInfo.InvariantCulture, out var factor) || !double.IsFinite(factor) || factor < 0 || factor > 1000)
             throw new CalibrationException($"{shown}:{factorNode.Start.Line}:{factorNode.Start.Column}: loading_factor: found '{written}', allowed a number from 0 to 1000");
         return new CoatingCalibration(Text("material_set") ?? "unnamed", factor, Text("fitted_by") ?? "not stated", Text("design"),
-            Text("source") ?? $"calibration file {shown}");
+            Text("source") ?? $"calibration file {shownAs ?? path}");
     }
 
     /// <summary>The file text: comments say what the number means; no timestamp, so the same fit gives the same bytes.</summary>

@@ -40,7 +40,9 @@ public sealed record CoatingCalibration(string MaterialSet, double Factor, strin
 
     /// <summary>The calibration a design uses: its calibration file, else the built-in default.</summary>
     public static CoatingCalibration For(PolarizerDesign design) =>
-        design.Calibration is { } reference ? CalibrationFile.Read(reference.FullPath, reference.Written) : Default;
+        design.Calibration is { } reference
+            ? CalibrationFile.Read(reference.FullPath, reference.Written, Path.Combine(Path.GetDirectoryName(design.SourceFile) ?? "", reference.Written))
+            : Default;
 
     /// <summary>The material set a design's surroundings belong to, as written in calibration files.</summary>
     public static string MaterialSetOf(Polarizer p)

@@ -39,7 +39,7 @@ public static class PolarizerEvaluator
         if (maxParallelism == 1 || solutions.Count == 1)
             for (int i = 0; i < solutions.Count; i++) result[i] = CircularSamples.From(solutions[i], directions);
         else
-            Parallel.For(0, solutions.Count, new ParallelOptions { MaxDegreeOfParallelism = maxParallelism ?? Environment.ProcessorCount },
+            Parallel.For(0, solutions.Count, Parallelism.Options(maxParallelism),
                 i => result[i] = CircularSamples.From(solutions[i], directions));
         return result;
     }

@@ -6,7 +6,7 @@ namespace Helipol.Design;
 /// What a builder can make: the limits a searched geometry must respect. Margins are workshop
 /// habits (common practice, no source), stated here so a reviewer can change them in one place.
 /// </summary>
-public sealed record FabricationLimits(double FormerHeightM, double WireDiameterM, double CentreHeightM, bool OnGround)
+public sealed record FabricationLimits(double FormerHeightM, double WireDiameterM, double CentreHeightM, bool OnGround, double BoreM = 0)
 {
     /// <summary>Foam left above and below the element ends, in wire diameters, so the ends stay held (common practice, no source).</summary>
     public const double EndMarginInWireDiameters = 1;
@@ -21,7 +21,8 @@ public sealed record FabricationLimits(double FormerHeightM, double WireDiameter
     public const double MinimumRunFraction = 0.2;
 
     public static FabricationLimits For(PolarizerDesign design) => new(
-        design.Polarizer.Former.HeightM, design.Polarizer.Wire.DiameterM, design.Polarizer.CentreHeightM, design.Whip.Kind == WhipKind.Monopole);
+        design.Polarizer.Former.HeightM, design.Polarizer.Wire.DiameterM, design.Polarizer.CentreHeightM, design.Whip.Kind == WhipKind.Monopole,
+        design.Polarizer.Former.BoreM);
 
     /// <summary>Largest rise that fits the former height with the end margins.</summary>
     public double MaximumRiseM => FormerHeightM - 2 * EndMarginInWireDiameters * WireDiameterM - WireDiameterM;
@@ -31,6 +32,9 @@ public sealed record FabricationLimits(double FormerHeightM, double WireDiameter
     {
         double d = WireDiameterM;
         if (layout.RiseM <= 0) return "rise must be positive";
+        // The bore already clears the whip's cover; a wall thinner than the wire would put the
+        // elements inside the cover (or the whip).
+        if ((layout.OuterDiameterM - BoreM) / 2 <= d) return "former wall thinner than the wire (elements would sit inside the cover)";
         if (layout.RiseM > MaximumRiseM + 1e-12) return "rise does not fit the former height";
         if (layout.ArcLengthM < MinimumRunFraction * layout.LengthM) return "rise too close to the element length";
         if (ElementClearance.MinimumAxisDistanceM(layout) < 2 * d + ExtraGapM) return "neighbouring elements too close";

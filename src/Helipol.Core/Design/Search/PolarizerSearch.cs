@@ -1,3 +1,4 @@
+using Helipol.Engine;
 using Helipol.Model;
 using MathNet.Numerics.LinearAlgebra;
 using MathNet.Numerics.Optimization;
@@ -72,7 +73,7 @@ public static class PolarizerSearch
 
         double polish = PolishStepAt5800MHzM * Math.Max(1, 5.8e9 / design.Band.CenterHz);
         var starts = new (double L, double H, double V, Winding W)[ranked.Length];
-        Parallel.For(0, ranked.Length, new ParallelOptions { MaxDegreeOfParallelism = Environment.ProcessorCount }, k =>
+        Parallel.For(0, ranked.Length, Parallelism.Options(), k =>
         {
             var (i, j, v) = ranked[k];
             starts[k] = Refine(scorer, bestCount, bestDiameter, fine.LengthsM[i], fine.RisesM[j], v, fine.Winding[i, j],
@@ -97,7 +98,7 @@ public static class PolarizerSearch
     {
         var values = new double[lengths.Length, rises.Length];
         var windings = new Winding[lengths.Length, rises.Length];
-        Parallel.For(0, lengths.Length * rises.Length, new ParallelOptions { MaxDegreeOfParallelism = Environment.ProcessorCount }, cell =>
+        Parallel.For(0, lengths.Length * rises.Length, Parallelism.Options(), cell =>
         {
             int i = cell / rises.Length, j = cell % rises.Length;
             var (v, w) = scorer.Score(count, diameter, lengths[i], rises[j]);

@@ -56,7 +56,7 @@ public static class ToleranceAnalysis
         var cone = ObservationSet.Cone(AnalysisCone.DefaultElevationRad(design.Whip.Kind), AzimuthStepRad);
         var sense = design.Polarizer.Sense;
         var worst = new double[count];
-        Parallel.For(0, count, new ParallelOptions { MaxDegreeOfParallelism = Environment.ProcessorCount }, b =>
+        Parallel.For(0, count, Parallelism.Options(), b =>
         {
             try
             {

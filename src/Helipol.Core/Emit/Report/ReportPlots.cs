@@ -12,6 +12,26 @@ public static class ReportPlots
 {
     public const int Width = 900, Height = 560, PolarSize = 620;
 
+    /// <summary>
+    /// Renders under the invariant culture: ScottPlot's tick labels format numbers with the current
+    /// culture, which would put decimal commas (and different bytes) in a German user's plots.
+    /// </summary>
+    private static byte[] Png(Plot plt, int width, int height, ImageFormat format)
+    {
+        var (culture, ui) = (System.Globalization.CultureInfo.CurrentCulture, System.Globalization.CultureInfo.CurrentUICulture);
+        try
+        {
+            System.Globalization.CultureInfo.CurrentCulture = System.Globalization.CultureInfo.InvariantCulture;
+            System.Globalization.CultureInfo.CurrentUICulture = System.Globalization.CultureInfo.InvariantCulture;
+            return plt.GetImageBytes(width, height, format);
+        }
+        finally
+        {
+            System.Globalization.CultureInfo.CurrentCulture = culture;
+            System.Globalization.CultureInfo.CurrentUICulture = ui;
+        }
+    }
+
     /// <summary>Axial ratio (wanted sense) and circular gains against frequency, with the bare whip's gain and the band edges.</summary>
     public static byte[] AxialRatioAndGain(SweepResult sweep, PolarizerDesign design)
     {
@@ -52,7 +72,7 @@ public static class ReportPlots
         plt.YLabel("axial ratio (dB)");
         plt.Axes.Right.Label.Text = "gain (dBic)";
         plt.ShowLegend(Alignment.UpperRight);
-        return plt.GetImageBytes(Width, Height, ImageFormat.Png);
+        return Png(plt, Width, Height, ImageFormat.Png);
     }
 
     /// <summary>VSWR against 50 Ω with and without the polarizer.</summary>
@@ -73,7 +93,7 @@ public static class ReportPlots
         plt.XLabel("frequency (MHz)");
         plt.YLabel("VSWR");
         plt.ShowLegend(Alignment.UpperRight);
-        return plt.GetImageBytes(Width, Height, ImageFormat.Png);
+        return Png(plt, Width, Height, ImageFormat.Png);
     }
 
     /// <summary>A polar plot of one cut: radius = gain above a floor 30 dB under the peak, RHCP and LHCP.</summary>
@@ -102,7 +122,7 @@ public static class ReportPlots
         plt.HideGrid();
         // A frameless plot has no title panel: the title goes in as an annotation.
         plt.Add.Annotation(FormattableString.Invariant($"{title}; outer ring {top:0} dBic, 5 dB per ring"), Alignment.UpperLeft);
-        return plt.GetImageBytes(PolarSize, PolarSize, ImageFormat.Png);
+        return Png(plt, PolarSize, PolarSize, ImageFormat.Png);
     }
 
     /// <summary>Heat map of the search's objective over element length × rise (blank: cannot be built).</summary>
@@ -133,7 +153,7 @@ public static class ReportPlots
         plt.Title($"{name}: axial-ratio map, {map.ElementCount} elements on {map.OuterDiameterM * 1e3:0.#} mm");
         plt.XLabel("element length (mm)");
         plt.YLabel("element rise (mm)");
-        return plt.GetImageBytes(Width, Height, ImageFormat.Png);
+        return Png(plt, Width, Height, ImageFormat.Png);
     }
 
     private static string Word(Sense s) => s == Sense.Rhcp ? "RHCP" : "LHCP";
