@@ -48,6 +48,7 @@ public static class AtomicFile
                 var folder = Path.GetDirectoryName(current) ?? ".";
                 var temp = Path.Combine(folder, "." + Path.GetFileName(current) + ".partial-" + Environment.ProcessId);
                 Directory.CreateDirectory(folder);
+                RemoveStaleTemporaries(folder, Path.GetFileName(current));
                 staged.Add((temp, current));
                 using (var file = new FileStream(temp, FileMode.Create, FileAccess.Write, FileShare.None))
                 using (var stream = WrapStream.Value?.Invoke(file) ?? file)
@@ -79,6 +80,33 @@ public static class AtomicFile
         var value = Environment.GetEnvironmentVariable(PauseVariable);
         if (value is not null && int.TryParse(value, NumberStyles.None, CultureInfo.InvariantCulture, out var ms) && ms > 0)
             Thread.Sleep(ms);
+    }
+
+    /// <summary>
+    /// A run killed between its two phases leaves ".NAME.partial-PID" beside NAME. They never stand
+    /// under a final name, but they would pile up: the next write of NAME removes those whose process
+    /// is gone (a live process may still be writing its own).
+    /// </summary>
+    private static void RemoveStaleTemporaries(string folder, string name)
+    {
+        var prefix = "." + name + ".partial-";
+        foreach (var temp in Directory.EnumerateFiles(folder, prefix + "*"))
+        {
+            var pidText = Path.GetFileName(temp)[prefix.Length..];
+            if (!int.TryParse(pidText, NumberStyles.None, CultureInfo.InvariantCulture, out var pid) || pid == Environment.ProcessId) continue;
+            if (!IsAlive(pid)) TryDelete(temp);
+        }
+    }
+
+    private static bool IsAlive(int pid)
+    {
+        try
+        {
+            using var process = System.Diagnostics.Process.GetProcessById(pid);
+            return !process.HasExited;
+        }
+        catch (ArgumentException) { return false; }
+        catch (InvalidOperationException) { return false; }
     }
 
     private static void TryDelete(string path)

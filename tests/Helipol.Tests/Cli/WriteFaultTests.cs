@@ -145,6 +145,8 @@ public class WriteFaultTests
             Assert.Equal(0, CliRun.Of("build", changed, "-o", output).ExitCode);
             Assert.NotEqual(before.Single(kv => kv.Key.EndsWith("design.json", StringComparison.Ordinal)).Value,
                 File.ReadAllBytes(Path.Combine(output, "quick-build", "design.json")));
+            // ... and clears the temporaries the killed run left behind.
+            Assert.Empty(Directory.GetFiles(output, "*.partial-*", SearchOption.AllDirectories));
         }
         finally { Directory.Delete(folder, recursive: true); }
     }
