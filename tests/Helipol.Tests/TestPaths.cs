@@ -19,6 +19,14 @@ internal static class TestPaths
 
     public static IEnumerable<string> DemoDesigns => Directory.GetFiles(Designs, "*.yaml").OrderBy(p => p, StringComparer.Ordinal);
 
+    /// <summary>Demo design file names, for [MemberData] theories.</summary>
+    public static TheoryData<string> DemoDesignNames()
+    {
+        var data = new TheoryData<string>();
+        foreach (var d in DemoDesigns) data.Add(Path.GetFileName(d));
+        return data;
+    }
+
     public static string NewTempFolder()
     {
         var path = Path.Combine(Path.GetTempPath(), "helipol-tests-" + Guid.NewGuid().ToString("N"));

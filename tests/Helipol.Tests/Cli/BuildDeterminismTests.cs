@@ -24,12 +24,7 @@ public class BuildDeterminismTests
         }
     }
 
-    public static TheoryData<string> Designs()
-    {
-        var data = new TheoryData<string>();
-        foreach (var d in TestPaths.DemoDesigns) data.Add(Path.GetFileName(d));
-        return data;
-    }
+    public static TheoryData<string> Designs() => TestPaths.DemoDesignNames();
 
     [Theory]
     [MemberData(nameof(Designs))]

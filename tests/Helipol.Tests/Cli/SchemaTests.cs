@@ -31,12 +31,7 @@ public class SchemaTests
         Assert.True(metaSchema.Evaluate(doc.RootElement).IsValid);
     }
 
-    public static TheoryData<string> Designs()
-    {
-        var data = new TheoryData<string>();
-        foreach (var d in TestPaths.DemoDesigns) data.Add(Path.GetFileName(d));
-        return data;
-    }
+    public static TheoryData<string> Designs() => TestPaths.DemoDesignNames();
 
     [Theory]
     [MemberData(nameof(Designs))]

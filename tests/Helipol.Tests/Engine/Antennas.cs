@@ -18,6 +18,23 @@ internal static class Antennas
             GroundPlane.None,
             new[] { new VoltageSource(new Vector3(0, 0, 0), volts ?? 1) });
 
+    /// <summary>
+    /// Half-wave dipoles along x (at z = 0) and y (at z = 0.005 λ, so they do not cross), the y one
+    /// fed with the complex factor <paramref name="yPhase"/>·j relative to the x one.
+    /// </summary>
+    public static WireModel CrossedDipoles(double yPhase)
+    {
+        const double h = 0.24, dz = 0.005;
+        return new WireModel(
+            new[]
+            {
+                new Wire(new Vector3[] { new(-h, 0, 0), new(0, 0, 0), new(h, 0, 0) }, 1e-3, PerfectConductor.Instance),
+                new Wire(new Vector3[] { new(0, -h, dz), new(0, 0, dz), new(0, h, dz) }, 1e-3, PerfectConductor.Instance),
+            },
+            GroundPlane.None,
+            new[] { new VoltageSource(new Vector3(0, 0, 0), 1), new VoltageSource(new Vector3(0, 0, dz), new System.Numerics.Complex(0, yPhase)) });
+    }
+
     /// <summary>Vertical monopole standing on a perfect ground, fed at its base.</summary>
     public static WireModel Monopole(double heightM, double radiusM) =>
         new(new[] { Wire.Straight(new Vector3(0, 0, 0), new Vector3(0, 0, heightM), radiusM) },

@@ -44,15 +44,7 @@ public class PolarizationTests
     [InlineData(-1.0, PolarizationSense.Rhcp, PolarizationSense.Lhcp)]
     public void CrossedDipolesInQuadratureAreCircular(double phase, PolarizationSense up, PolarizationSense down)
     {
-        const double h = 0.24, dz = 0.005;
-        var model = new WireModel(
-            new[]
-            {
-                new Wire(new Vector3[] { new(-h, 0, 0), new(0, 0, 0), new(h, 0, 0) }, 1e-3, PerfectConductor.Instance),
-                new Wire(new Vector3[] { new(0, -h, dz), new(0, 0, dz), new(0, h, dz) }, 1e-3, PerfectConductor.Instance),
-            },
-            GroundPlane.None,
-            new[] { new VoltageSource(new Vector3(0, 0, 0), 1), new VoltageSource(new Vector3(0, 0, dz), new Complex(0, phase)) });
+        var model = Antennas.CrossedDipoles(phase);
         var s = Antennas.Solve(model);
         var top = s.GainAt(0, 0);
         var bottom = s.GainAt(Math.PI, 0);

@@ -31,6 +31,27 @@ public abstract class FieldType
             context.Values[key] = value with { IsDefault = true, Mark = parentMark };
     }
 
+    /// <summary>
+    /// The common start of reading a scalar key: refuses a missing or non-scalar value, stores
+    /// <c>auto</c> where the key allows it, and otherwise hands back the trimmed text to parse.
+    /// </summary>
+    protected bool TryTakeScalar(YamlNode node, string path, ReadContext context, bool allowAuto, out string text)
+    {
+        text = "";
+        if (node is not YamlScalar scalar || scalar.IsNull)
+        {
+            Fail(context, node, path, node.Describe(), Allowed);
+            return false;
+        }
+        text = scalar.Value.Trim();
+        if (allowAuto && text == "auto")
+        {
+            context.Values[path] = new AutoValue { Mark = node.Mark };
+            return false;
+        }
+        return true;
+    }
+
     protected static void Fail(ReadContext context, YamlNode node, string path, string found, string allowed) =>
         context.Errors.Add(node.Mark, path, found, allowed);
 }

@@ -21,17 +21,7 @@ public sealed class IntegerField : FieldType
 
     public override void Read(YamlNode node, string path, ReadContext context)
     {
-        if (node is not YamlScalar scalar || scalar.IsNull)
-        {
-            Fail(context, node, path, node.Describe(), Allowed);
-            return;
-        }
-        var text = scalar.Value.Trim();
-        if (AllowAuto && text == "auto")
-        {
-            context.Values[path] = new AutoValue { Mark = node.Mark };
-            return;
-        }
+        if (!TryTakeScalar(node, path, context, AllowAuto, out var text)) return;
         if (!long.TryParse(text, NumberStyles.AllowLeadingSign, CultureInfo.InvariantCulture, out var value))
         {
             Fail(context, node, path, YamlScalar.Shorten(text), Allowed);

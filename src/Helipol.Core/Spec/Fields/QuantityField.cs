@@ -30,17 +30,7 @@ public sealed class QuantityField : FieldType
 
     public override void Read(YamlNode node, string path, ReadContext context)
     {
-        if (node is not YamlScalar scalar || scalar.IsNull)
-        {
-            Fail(context, node, path, node.Describe(), Allowed);
-            return;
-        }
-        var text = scalar.Value.Trim();
-        if (AllowAuto && text == "auto")
-        {
-            context.Values[path] = new AutoValue { Mark = node.Mark };
-            return;
-        }
+        if (!TryTakeScalar(node, path, context, AllowAuto, out var text)) return;
         switch (NumberText.TrySplit(text, out var number, out var unit))
         {
             case NumberText.Outcome.NotANumber:

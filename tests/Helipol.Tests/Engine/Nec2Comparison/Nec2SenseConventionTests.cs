@@ -25,15 +25,7 @@ public class Nec2SenseConventionTests
     public void CrossedDipolesInQuadratureHaveTheSameSenseInBoth(double phase, string necUp, string necDown, PolarizationSense engineUp)
     {
         Nec2c.Require();
-        const double h = 0.24, dz = 0.005;
-        var model = new WireModel(
-            new[]
-            {
-                new Wire(new Vector3[] { new(-h, 0, 0), new(0, 0, 0), new(h, 0, 0) }, 1e-3, PerfectConductor.Instance),
-                new Wire(new Vector3[] { new(0, -h, dz), new(0, 0, dz), new(0, h, dz) }, 1e-3, PerfectConductor.Instance),
-            },
-            GroundPlane.None,
-            new[] { new VoltageSource(new Vector3(0, 0, 0), 1), new VoltageSource(new Vector3(0, 0, dz), new Complex(0, phase)) });
+        var model = Antennas.CrossedDipoles(phase);
         var nec = Nec2c.Run(Nec2Deck.Write(model, Antennas.OneMetreWavelengthHz, [new Nec2Cut(0, 2, 180, 0, 1, 0)]));
         var engine = Antennas.Solve(model);
         Assert.Equal(necUp, nec.At(0, 0).Sense);
