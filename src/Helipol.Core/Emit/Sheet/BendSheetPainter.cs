@@ -106,8 +106,11 @@ public static class BendSheetPainter
             foreach (var line in wrap.Lines.GroupBy(l => l.ElementNumber).Select(grp => grp.First()))
             {
                 var lx = line.From.X - from;
-                if (lx >= 0 && lx < w)
-                    pen.Text(line.ElementNumber.ToString(CultureInfo.InvariantCulture), x + lx + 0.8, y + wrap.HeightMm - line.From.Y - 0.8, 2.4);
+                // A line that starts on the right edge (a left winding's first element wraps at once)
+                // still gets its number, set inside the strip.
+                if (lx >= 0 && lx <= w + 1e-9)
+                    pen.Text(line.ElementNumber.ToString(CultureInfo.InvariantCulture), x + (lx > w - 4 ? lx - 3.2 : lx + 0.8),
+                        y + wrap.HeightMm - line.From.Y - 0.8, 2.4);
             }
             y += wrap.HeightMm + 4;
         }
