@@ -135,6 +135,30 @@ public class SheetTests
         Assert.Equal(2, pdf.GetPages().Sum(p => p.GetImages().Count()));
     }
 
+    [Fact]
+    public void PacketEmbedsPlotsWithoutLoss()
+    {
+        // A plot's one-pixel lines and small lettering must come through unchanged. PdfPig decodes
+        // the image back from the file (Flate, PDF 32000-1 §7.4.4); a JPEG (DCTDecode, §7.4.8) is
+        // lossy and would not give the same pixels, nor would PdfPig hand it back as PNG.
+        using var bmp = new SKBitmap(new SKImageInfo(240, 160, SKColorType.Rgba8888, SKAlphaType.Opaque));
+        for (var y = 0; y < bmp.Height; y++)
+            for (var x = 0; x < bmp.Width; x++)
+                bmp.SetPixel(x, y, (x + y) % 2 == 0 ? SKColors.White : new SKColor((byte)x, (byte)y, (byte)(x ^ y)));
+        using var img = SKImage.FromBitmap(bmp);
+        var png = img.Encode(SKEncodedImageFormat.Png, 100).ToArray();
+        var input = BuildInputs.Typical with { PlotPngs = [png] };
+        var bytes = Helipol.Emit.FabricationSet.Render(input).Single(f => f.FileName == "packet.pdf").Bytes;
+        using var pdf = PdfDocument.Open(bytes);
+        var image = pdf.GetPages().SelectMany(p => p.GetImages()).Single();
+        Assert.True(image.TryGetPng(out var decodedPng), "the embedded plot is not stored losslessly");
+        using var decoded = SKBitmap.Decode(decodedPng).Copy(SKColorType.Rgba8888);
+        Assert.Equal((bmp.Width, bmp.Height), (decoded.Width, decoded.Height));
+        for (var y = 0; y < bmp.Height; y++)
+            for (var x = 0; x < bmp.Width; x++)
+                Assert.Equal(bmp.GetPixel(x, y), decoded.GetPixel(x, y));
+    }
+
     /// <summary>PDF 32000-1:2008 §8.3.2.3: user space units are 1/72 in; A4 (ISO 216) is
     /// 210 × 297 mm = 595.28 × 841.89 pt, US Letter 8.5 × 11 in = 612 × 792 pt.</summary>
     private static void AssertPaper(PaperSize paper, double w, double h)

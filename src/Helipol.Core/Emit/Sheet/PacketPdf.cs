@@ -43,7 +43,11 @@ public static class PacketPdf
             var w = probe.Width * scale;
             items.Add((h + 6, (p, y) =>
             {
-                using var image = SKImage.FromEncodedData(png);
+                // Decoded to raw pixels first: Skia's PDF backend re-encodes a still-encoded PNG as
+                // JPEG whatever the document's quality, while raw pixels at a quality above 100 are
+                // stored losslessly (Flate), which keeps the plots' axis lettering sharp.
+                using var bitmap = SKBitmap.Decode(png);
+                using var image = SKImage.FromBitmap(bitmap);
                 p.Canvas.DrawImage(image, new SKRect((float)m, (float)(y + 3), (float)(m + w), (float)(y + 3 + h)), new SKSamplingOptions(SKFilterMode.Linear));
             }));
         }

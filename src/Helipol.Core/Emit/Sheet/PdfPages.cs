@@ -22,6 +22,9 @@ internal static class PdfPages
             // Skia rounds the page size to whole raster pixels; at 7200 dpi that is 0.01 pt, which keeps
             // A4 at 595.28 × 841.89 pt. Nothing on these pages is rasterised.
             RasterDpi = 7200,
+            // Above 100 Skia embeds images losslessly (Flate); a metadata value left at its struct
+            // default of 0 would mean JPEG at quality 0 and blur the plots' axis labels.
+            EncodingQuality = SKDocumentPdfMetadata.DefaultEncodingQuality,
             Creation = null,
             Modified = null,
         };
