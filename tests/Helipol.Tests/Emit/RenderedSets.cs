@@ -12,6 +12,7 @@ internal static class RenderedSets
     {
         ["Typical"] = new(() => FabricationSet.Render(BuildInputs.Typical)),
         ["LeftSixOnLetter"] = new(() => FabricationSet.Render(BuildInputs.LeftSixOnLetter)),
+        ["Large"] = new(() => FabricationSet.Render(BuildInputs.Large)),
     };
 
     public static byte[] File(string inputName, string fileName) =>

@@ -117,6 +117,35 @@ public class SheetTests
             Assert.Contains(texts, t => t.Contains("Ring templates") && t.Contains($"Ring {ring}, top face") && t.Contains($"Ring {ring}, bottom face"));
     }
 
+    [Theory]
+    [InlineData("bend-sheet.pdf")]
+    [InlineData("packet.pdf")]
+    public void LargeDesignKeepsEverySectionOnThePaper(string file)
+    {
+        // A 150 mm former unrolls to a 471 mm strip (π × 150), three parts on A4's 186 mm of width
+        // between margins; those parts alone are taller than one page, so the sheet must flow on.
+        // PdfPig reads the text back: every section title and every part is there, and no letter
+        // lies outside the paper (PDF 32000-1 §8.3.2.3: the page is 595.28 × 841.89 pt).
+        using var pdf = PdfDocument.Open(RenderedSets.File(nameof(BuildInputs.Large), file));
+        var text = string.Join(" ", pdf.GetPages().Select(p => string.Join(" ", p.GetWords().Select(w => w.Text))));
+        foreach (var title in new[] { "1 Element:", "2 Wrap template:", "3 Bend:", "4 Which way the elements run", "5 Build table", "6 Cautions",
+                     "part 1 of 3", "part 2 of 3", "part 3 of 3", "one turn of the former", "Pitch angle", "RF exposure" })
+            Assert.Contains(title, text);
+        foreach (var page in pdf.GetPages())
+        {
+            AssertPaper(PaperSize.A4, page.Width, page.Height);
+            Assert.All(page.Letters, l => Assert.True(l.GlyphRectangle.Bottom >= 0 && l.GlyphRectangle.Top <= page.Height,
+                $"'{l.Value}' at y = {l.GlyphRectangle.Bottom:0.0} pt lies off page {page.Number}"));
+        }
+        if (file == "bend-sheet.pdf")
+        {
+            Assert.True(pdf.NumberOfPages > 1);
+            // The PNG holds the same pages one under the other, each one paper tall (A4 at 150 dpi).
+            var png = RenderedSets.File(nameof(BuildInputs.Large), "bend-sheet.png");
+            Assert.Equal((int)Math.Round(297 / 25.4 * 150) * pdf.NumberOfPages, (int)BinaryPrimitives.ReadUInt32BigEndian(png.AsSpan(20)));
+        }
+    }
+
     [Fact]
     public void PacketCarriesThePlotsItIsGiven()
     {

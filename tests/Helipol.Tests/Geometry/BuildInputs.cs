@@ -52,12 +52,40 @@ public static class BuildInputs
         Dpi = 200,
     };
 
+    /// <summary>A large 915 MHz build: the former, wire and board of designs/telemetry-915.yaml with
+    /// the element length and rise its solve gave (130.15 mm, 92.80 mm). Its wrap template is a
+    /// 471 mm strip in three parts, more than one page holds.</summary>
+    public static PolarizerBuildInput Large => Typical with
+    {
+        DesignName = "test-large-915",
+        ElementCount = 6,
+        ElementLengthMm = 130.15,
+        ElementRiseMm = 92.80,
+        CentreHeightMm = 50,
+        WireDiameterMm = 1.0,
+        FormerOuterDiameterMm = 150,
+        FormerBoreDiameterMm = 12.5,
+        FormerHeightMm = 100,
+        CoverDiameterMm = 12,
+        WrapMaterial = "packing tape",
+        WrapLayers = 2,
+        KerfMm = 0.5,
+        RingCount = 1,
+        BoardWidthMm = 600,
+        BoardHeightMm = 600,
+        BoardThicknessMm = 100,
+        FrequencyHz = 915e6,
+        Dpi = 150,
+        SummaryLines = [],
+    };
+
     public static IEnumerable<object[]> Both() => [[nameof(Typical)], [nameof(LeftSixOnLetter)]];
 
     public static PolarizerBuildInput ByName(string name) => name switch
     {
         nameof(Typical) => Typical,
         nameof(LeftSixOnLetter) => LeftSixOnLetter,
+        nameof(Large) => Large,
         _ => throw new ArgumentOutOfRangeException(nameof(name)),
     };
 }

@@ -5,9 +5,12 @@ using Helipol.Geometry;
 namespace Helipol.Emit.Sheet;
 
 /// <summary>
-/// Draws the 1:1 bend sheet on a canvas scaled to millimetres (y down). The same drawing becomes
+/// Draws the 1:1 bend sheet on canvases scaled to millimetres (y down). The same drawing becomes
 /// the PNG and the vector PDF. Contents: calibration bars, element cut template with tolerance band,
-/// unrolled wrap template, arc bend template, winding drawing, build table and cautions.
+/// unrolled wrap template, arc bend template, winding drawing, build table and cautions. The
+/// sections are laid out as blocks and flowed onto as many pages as they need, so a large former
+/// (a wrap template in several parts) pushes the later sections onto the next page instead of off
+/// the paper; every page carries the title and both calibration bars.
 /// </summary>
 public static class BendSheetPainter
 {
@@ -16,61 +19,126 @@ public static class BendSheetPainter
     public const double BarTopMm = 27;
     public const double MetricBarMm = 50;
     public const double InchBarMm = 2 * Paper.MmPerInch;
+    /// <summary>Top of the first section on every page, below the title and the bars, mm.</summary>
+    public const double ContentTopMm = 38;
 
-    public static void Paint(SKCanvas canvas, PolarizerGeometry g)
+    /// <summary>A section (or one part of one) that stays whole on a page: its height and how to
+    /// draw it with its top edge at a given page height.</summary>
+    private sealed record Block(double HeightMm, Action<SheetPen, double> Draw);
+
+    /// <summary>One drawing action per page, in order.</summary>
+    public static IReadOnlyList<Action<SKCanvas>> Pages(PolarizerGeometry g)
     {
-        var (pageW, _) = Paper.SizeMm(g.Input.Paper);
-        using var pen = new SheetPen(canvas);
+        var (pageW, pageH) = Paper.SizeMm(g.Input.Paper);
+        var bottom = pageH - MarginMm;
+        var pages = new List<List<(double Top, Block Block)>> { new() };
+        var cursor = ContentTopMm;
+        foreach (var block in Blocks(g, pageW))
+        {
+            if (cursor + block.HeightMm > bottom && pages[^1].Count > 0)
+            {
+                pages.Add([]);
+                cursor = ContentTopMm;
+            }
+            pages[^1].Add((cursor, block));
+            cursor += block.HeightMm;
+        }
+        return pages.Select((page, k) => (Action<SKCanvas>)(canvas =>
+        {
+            using var pen = new SheetPen(canvas);
+            Header(pen, g, k + 1, pages.Count);
+            foreach (var (top, block) in page) block.Draw(pen, top);
+        })).ToList();
+    }
+
+    private static void Header(SheetPen pen, PolarizerGeometry g, int page, int pages)
+    {
         var i = g.Input;
         var m = MarginMm;
         var ci = CultureInfo.InvariantCulture;
-        pen.Text($"Bend sheet: {i.DesignName}", m, 17, 5);
+        var of = pages > 1 ? string.Create(ci, $" (page {page} of {pages})") : "";
+        pen.Text($"Bend sheet: {i.DesignName}{of}", m, 17, 5);
         pen.Text(string.Create(ci, $"{BuildTable.SenseLabel(i.Sense)} · {i.ElementCount} elements · {BuildTable.FrequencyLabel(i.FrequencyHz)} · print at 100 % (actual size), then check both bars"), m, 23, 3, grey: true);
         CalibrationBars(pen, m);
+    }
+
+    /// <summary>The sections top to bottom; each block's section title sits 4 mm below its top.</summary>
+    private static IEnumerable<Block> Blocks(PolarizerGeometry g, double pageW)
+    {
+        var i = g.Input;
+        var m = MarginMm;
+        var ci = CultureInfo.InvariantCulture;
 
         // 1. Element cut template.
-        var y = 42.0;
-        pen.Text("1  Element: lay the wire on the line, cut within the grey band", m, y, 3.2);
-        var L = i.ElementLengthMm;
-        var tol = i.LengthToleranceMm;
-        pen.FillRect(m + L - tol, y + 2, 2 * tol, 8, new SKColor(200, 200, 200));
-        pen.Line(m, y + 6, m + L, y + 6, 0.5);
-        pen.Line(m, y + 2, m, y + 10, 0.3);
-        pen.Line(m + L, y + 2, m + L, y + 10, 0.3);
-        pen.Text(string.Create(ci, $"L = {L:0.00} mm, tolerance ± {tol:0.00} mm"), m, y + 14, 2.6, grey: true);
+        yield return new Block(20, (pen, top) =>
+        {
+            var y = top + 4;
+            pen.Text("1  Element: lay the wire on the line, cut within the grey band", m, y, 3.2);
+            var L = i.ElementLengthMm;
+            var tol = i.LengthToleranceMm;
+            pen.FillRect(m + L - tol, y + 2, 2 * tol, 8, new SKColor(200, 200, 200));
+            pen.Line(m, y + 6, m + L, y + 6, 0.5);
+            pen.Line(m, y + 2, m, y + 10, 0.3);
+            pen.Line(m + L, y + 2, m + L, y + 10, 0.3);
+            pen.Text(string.Create(ci, $"L = {L:0.00} mm, tolerance ± {tol:0.00} mm"), m, y + 14, 2.6, grey: true);
+        });
 
-        // 2. Wrap template.
-        y += 20;
-        pen.Text("2  Wrap template: cut out, wrap round the former (bottom edge down), mark the lines", m, y, 3.2);
-        y = WrapTemplateDrawing(pen, WrapTemplate.From(g), m, y + 4, pageW - 2 * m);
+        // 2. Wrap template, one block per part; the section title rides with the first part.
+        var wrap = WrapTemplate.From(g);
+        var maxWidth = pageW - 2 * m;
+        var pieceW = maxWidth - wrap.GlueTabMm;
+        var pieces = (int)Math.Ceiling(wrap.WidthMm / pieceW - 1e-9);
+        for (var p = 0; p < pieces; p++)
+        {
+            var part = p;
+            var first = p == 0;
+            yield return new Block((first ? 8 : 0) + wrap.HeightMm + 4, (pen, top) =>
+            {
+                if (first) pen.Text("2  Wrap template: cut out, wrap round the former (bottom edge down), mark the lines", m, top + 4, 3.2);
+                WrapTemplatePart(pen, wrap, part, pieces, pieceW, m, first ? top + 8 : top);
+            });
+        }
+        yield return new Block(8, (pen, top) =>
+            pen.Text(string.Create(ci, $"{wrap.WidthMm:0.00} mm = one turn of the former; numbers at each element's lower end"), m, top, 2.4, grey: true));
 
         // 3. Arc bend template and 4. winding drawing, side by side.
-        var boxW = (pageW - 2 * m) / 2;
-        pen.Text("3  Bend: the wire must lie on this arc", m, y, 3.2);
-        pen.Text("4  Which way the elements run", m + boxW, y, 3.2);
-        ArcTemplate(pen, g, m, y + 4, boxW - 4, 44);
-        WindingDrawing(pen, g, m + boxW, y + 4);
-        y += 60;
+        yield return new Block(60, (pen, top) =>
+        {
+            var y = top + 4;
+            var boxW = (pageW - 2 * m) / 2;
+            pen.Text("3  Bend: the wire must lie on this arc", m, y, 3.2);
+            pen.Text("4  Which way the elements run", m + boxW, y, 3.2);
+            ArcTemplate(pen, g, m, y + 4, boxW - 4, 44);
+            WindingDrawing(pen, g, m + boxW, y + 4);
+        });
 
         // 5. Build table.
-        pen.Text("5  Build table", m, y, 3.2);
-        y += 5.5;
-        foreach (var (label, value) in BuildTable.Rows(g))
+        var rows = BuildTable.Rows(g);
+        yield return new Block(5.5 + rows.Count * 4.4 + 2, (pen, top) =>
         {
-            pen.Text(label, m, y, 2.8);
-            pen.Text(value, m + 34, y, 2.8);
-            y += 4.4;
-        }
+            var y = top + 4;
+            pen.Text("5  Build table", m, y, 3.2);
+            y += 5.5;
+            foreach (var (label, value) in rows)
+            {
+                pen.Text(label, m, y, 2.8);
+                pen.Text(value, m + 34, y, 2.8);
+                y += 4.4;
+            }
+        });
 
         // 6. Cautions.
-        y += 2;
-        pen.Text("6  Cautions", m, y, 3.2);
-        y += 5;
-        foreach (var line in Cautions.Lines)
+        yield return new Block(5 + Cautions.Lines.Count * 3.8, (pen, top) =>
         {
-            pen.Text(line, m, y, 2.5);
-            y += 3.8;
-        }
+            var y = top + 4;
+            pen.Text("6  Cautions", m, y, 3.2);
+            y += 5;
+            foreach (var line in Cautions.Lines)
+            {
+                pen.Text(line, m, y, 2.5);
+                y += 3.8;
+            }
+        });
     }
 
     /// <summary>Solid bars exactly 50 mm and 2 in long; a printer scaling the page shows here first.</summary>
@@ -82,40 +150,33 @@ public static class BendSheetPainter
         pen.Text("2 in (50.8 mm)", x + 60, BarTopMm + BarHeightMm + 3.5, 2.6);
     }
 
-    private static double WrapTemplateDrawing(SheetPen pen, WrapTemplate wrap, double x, double top, double maxWidth)
+    /// <summary>Draws part p of the wrap template with its top edge at top.</summary>
+    private static void WrapTemplatePart(SheetPen pen, WrapTemplate wrap, int p, int pieces, double pieceW, double x, double top)
     {
-        var pieceW = maxWidth - wrap.GlueTabMm;
-        var pieces = (int)Math.Ceiling(wrap.WidthMm / pieceW - 1e-9);
         var y = top;
-        for (var p = 0; p < pieces; p++)
+        var from = p * pieceW;
+        var w = Math.Min(pieceW, wrap.WidthMm - from);
+        pen.Rect(x, y, w, wrap.HeightMm, 0.3);
+        if (p == pieces - 1)
         {
-            var from = p * pieceW;
-            var w = Math.Min(pieceW, wrap.WidthMm - from);
-            pen.Rect(x, y, w, wrap.HeightMm, 0.3);
-            if (p == pieces - 1)
-            {
-                pen.Rect(x + w, y, wrap.GlueTabMm, wrap.HeightMm, 0.2, [1f, 1f]);
-                pen.Text("glue", x + w + 1, y + wrap.HeightMm / 2 + 1, 2.2, grey: true);
-            }
-            if (pieces > 1) pen.Text($"part {p + 1} of {pieces}", x + 1, y + wrap.HeightMm - 1, 2.2, grey: true);
-            pen.Canvas.Save();
-            pen.Canvas.ClipRect(new SKRect((float)x, (float)y, (float)(x + w), (float)(y + wrap.HeightMm)));
-            foreach (var line in wrap.Lines)
-                pen.Line(x + line.From.X - from, y + wrap.HeightMm - line.From.Y, x + line.To.X - from, y + wrap.HeightMm - line.To.Y, 0.3);
-            pen.Canvas.Restore();
-            foreach (var line in wrap.Lines.GroupBy(l => l.ElementNumber).Select(grp => grp.First()))
-            {
-                var lx = line.From.X - from;
-                // A line that starts on the right edge (a left winding's first element wraps at once)
-                // still gets its number, set inside the strip.
-                if (lx >= 0 && lx <= w + 1e-9)
-                    pen.Text(line.ElementNumber.ToString(CultureInfo.InvariantCulture), x + (lx > w - 4 ? lx - 3.2 : lx + 0.8),
-                        y + wrap.HeightMm - line.From.Y - 0.8, 2.4);
-            }
-            y += wrap.HeightMm + 4;
+            pen.Rect(x + w, y, wrap.GlueTabMm, wrap.HeightMm, 0.2, [1f, 1f]);
+            pen.Text("glue", x + w + 1, y + wrap.HeightMm / 2 + 1, 2.2, grey: true);
         }
-        pen.Text(string.Create(CultureInfo.InvariantCulture, $"{wrap.WidthMm:0.00} mm = one turn of the former; numbers at each element's lower end"), x, y, 2.4, grey: true);
-        return y + 8;
+        if (pieces > 1) pen.Text($"part {p + 1} of {pieces}", x + 1, y + wrap.HeightMm - 1, 2.2, grey: true);
+        pen.Canvas.Save();
+        pen.Canvas.ClipRect(new SKRect((float)x, (float)y, (float)(x + w), (float)(y + wrap.HeightMm)));
+        foreach (var line in wrap.Lines)
+            pen.Line(x + line.From.X - from, y + wrap.HeightMm - line.From.Y, x + line.To.X - from, y + wrap.HeightMm - line.To.Y, 0.3);
+        pen.Canvas.Restore();
+        foreach (var line in wrap.Lines.GroupBy(l => l.ElementNumber).Select(grp => grp.First()))
+        {
+            var lx = line.From.X - from;
+            // A line that starts on the right edge (a left winding's first element wraps at once)
+            // still gets its number, set inside the strip.
+            if (lx >= 0 && lx <= w + 1e-9)
+                pen.Text(line.ElementNumber.ToString(CultureInfo.InvariantCulture), x + (lx > w - 4 ? lx - 3.2 : lx + 0.8),
+                    y + wrap.HeightMm - line.From.Y - 0.8, 2.4);
+        }
     }
 
     private static void ArcTemplate(SheetPen pen, PolarizerGeometry g, double x, double top, double w, double h)

@@ -4,7 +4,8 @@ using Helipol.Geometry;
 namespace Helipol.Emit.Sheet;
 
 /// <summary>bend-sheet.png: the bend sheet rasterised at the design's dpi on the chosen paper, with
-/// a pHYs chunk so image viewers and printers reproduce it at 1:1.</summary>
+/// a pHYs chunk so image viewers and printers reproduce it at 1:1. When the sheet needs more than
+/// one page, the pages stand one under the other, each exactly one paper tall.</summary>
 public static class BendSheetPng
 {
     public static (int Width, int Height) PixelSize(PaperSize paper, int dpi)
@@ -15,14 +16,22 @@ public static class BendSheetPng
 
     public static byte[] Write(PolarizerGeometry g)
     {
-        var (w, h) = PixelSize(g.Input.Paper, g.Input.Dpi);
+        var pages = BendSheetPainter.Pages(g);
+        var (w, pageH) = PixelSize(g.Input.Paper, g.Input.Dpi);
+        var h = pageH * pages.Count;
         using var surface = SKSurface.Create(new SKImageInfo(w, h, SKColorType.Rgba8888, SKAlphaType.Premul))
             ?? throw new InvalidOperationException("could not allocate the raster for the bend sheet");
         var canvas = surface.Canvas;
         canvas.Clear(SKColors.White);
         var pxPerMm = (float)(g.Input.Dpi / Paper.MmPerInch);
-        canvas.Scale(pxPerMm);
-        BendSheetPainter.Paint(canvas, g);
+        for (var k = 0; k < pages.Count; k++)
+        {
+            canvas.Save();
+            canvas.Translate(0, k * pageH);
+            canvas.Scale(pxPerMm);
+            pages[k](canvas);
+            canvas.Restore();
+        }
         canvas.Flush();
         using var image = surface.Snapshot();
         using var pixels = image.PeekPixels();

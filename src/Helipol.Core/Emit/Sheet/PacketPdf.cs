@@ -15,7 +15,7 @@ public static class PacketPdf
     {
         var pages = new List<Action<SKCanvas>>();
         pages.AddRange(SummaryPages(g));
-        pages.Add(c => BendSheetPainter.Paint(c, g));
+        pages.AddRange(BendSheetPainter.Pages(g));
         pages.AddRange(RingPages(g));
         return PdfPages.Write(g.Input.Paper, $"Build packet: {g.Input.DesignName}", pages);
     }
