@@ -4,9 +4,15 @@ namespace Helipol.Geometry;
 /// i.e. mirrored left-right, so it can be laid on the paper face down.</summary>
 public enum RingFace { Top, Bottom }
 
-/// <summary>A mark on a ring face where an element meets that face, in the view's own coordinates
-/// (origin at the ring's centre, mm).</summary>
-public sealed record FaceMark(int ElementNumber, double AzimuthRad, Point2 OnContour, Point2 Inner, Point2 LabelAt);
+/// <summary>What a face mark stands for: the wire crossing the face, or an element's end inside the
+/// ring, drawn on the face beyond that end.</summary>
+public enum FaceMarkKind { Crossing, End }
+
+/// <summary>A mark on a ring face, in the view's own coordinates (origin at the ring's centre, mm):
+/// where an element's wire crosses that face, or where an element ends inside the ring, with
+/// <see cref="DepthMm"/> the end's distance into the ring from this face (0 for a crossing).</summary>
+public sealed record FaceMark(int ElementNumber, double AzimuthRad, Point2 OnContour, Point2 Inner, Point2 LabelAt,
+    FaceMarkKind Kind, double DepthMm);
 
 /// <summary>
 /// One face of one foam ring as drawn at 1:1: kerf-compensated cut contours (outer grown by kerf/2,

@@ -3,15 +3,28 @@ namespace Helipol.Geometry;
 /// <summary>
 /// The foam rings that stack into the former, as cutting templates. Each ring has a top-face view
 /// (the cut piece, nested on the board) and a bottom-face view (mirrored, drawn beside the board as
-/// a guide for marking the underside). A face's marks sit where each element's wire meets that
-/// face's height; where an element ends short of a face, the mark shows the azimuth of that end.
+/// a guide for marking the underside). A face gets a tick only where an element's wire crosses it.
+/// An element that ends inside a ring gets an end mark instead, on the face beyond that end (the
+/// lower end on the ring's bottom face, the upper end on its top face), at the end's azimuth and
+/// with its depth into the ring from that face, so nobody glues a wire out to a face it never reaches.
 /// </summary>
 public static class RingTemplates
 {
     /// <summary>Space round a ring's contour for the element numbers, mm.</summary>
     public const double LabelMarginMm = 5.0;
-    /// <summary>Band under each view for its ring number and design name, mm.</summary>
-    public const double TextBandMm = 8.0;
+    /// <summary>Band under each view for its ring number, design name and element-end note, mm.</summary>
+    public const double TextBandMm = 11.0;
+    /// <summary>Radius of the circle that marks an element's end, mm.</summary>
+    public const double EndMarkRadiusMm = 0.6;
+
+    /// <summary>The note under a face with element ends, e.g. "o element end 3.40 mm into the ring";
+    /// null when the face has none.</summary>
+    public static string? EndNote(RingFaceView v)
+    {
+        var depths = v.Marks.Where(m => m.Kind == FaceMarkKind.End)
+            .Select(m => m.DepthMm.ToString("0.00", System.Globalization.CultureInfo.InvariantCulture)).Distinct().ToList();
+        return depths.Count == 0 ? null : $"o element end {string.Join(" / ", depths)} mm into the ring";
+    }
     public const double MarkLengthMm = 2.0;
     public const double NotchDepthMm = 1.5;
     public const double NotchHalfWidthMm = 1.0;
@@ -26,16 +39,28 @@ public static class RingTemplates
     public static RingFaceView View(PolarizerGeometry g, int ringNumber, RingFace face, Point2 centre, double markRadiusMm, double boreRadiusMm)
     {
         var kerf = g.Input.KerfMm;
-        var faceZ = g.RingFaceHeightsMm[face == RingFace.Top ? ringNumber : ringNumber - 1];
+        var faces = g.RingFaceHeightsMm;
+        var faceZ = faces[face == RingFace.Top ? ringNumber : ringNumber - 1];
         var cutOuter = g.FormerOuterRadiusMm + kerf / 2;
         var cutBore = boreRadiusMm - kerf / 2;
-        var marks = g.Elements.Select(e =>
+        FaceMark Mark(HelicalElement e, double az, FaceMarkKind kind, double depth)
         {
-            var az = e.AzimuthAtHeightRad(faceZ);
             var a = RingFaceView.DrawingAngle(face, az);
             return new FaceMark(e.Number, az, Point2.Polar(markRadiusMm, a), Point2.Polar(markRadiusMm - MarkLengthMm, a),
-                Point2.Polar(cutOuter + LabelMarginMm / 2, a));
-        }).ToList();
+                Point2.Polar(cutOuter + LabelMarginMm / 2, a), kind, depth);
+        }
+        var marks = new List<FaceMark>();
+        foreach (var e in g.Elements)
+        {
+            var portion = WirePortion.InRing(e, faces[ringNumber - 1], faces[ringNumber]);
+            if (portion is not { } p) continue;
+            if (face == RingFace.Top && p.CrossesTop) marks.Add(Mark(e, e.AzimuthAtHeightRad(faceZ), FaceMarkKind.Crossing, 0));
+            if (face == RingFace.Bottom && p.CrossesBottom) marks.Add(Mark(e, e.AzimuthAtHeightRad(faceZ), FaceMarkKind.Crossing, 0));
+            if (face == RingFace.Top && !p.CrossesTop && p.EndsAtUpper)
+                marks.Add(Mark(e, e.EndAzimuthRad, FaceMarkKind.End, faceZ - e.UpperEndHeightMm));
+            if (face == RingFace.Bottom && !p.CrossesBottom && p.EndsAtLower)
+                marks.Add(Mark(e, e.StartAzimuthRad, FaceMarkKind.End, e.LowerEndHeightMm - faceZ));
+        }
         var notchAngle = RingFaceView.DrawingAngle(face, 0);
         var half = Math.Asin(NotchHalfWidthMm / cutOuter);
         var notch = new OrientationNotch(Point2.Polar(cutOuter, notchAngle - half), Point2.Polar(cutOuter - NotchDepthMm, notchAngle),

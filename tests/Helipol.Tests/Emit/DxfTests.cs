@@ -89,8 +89,10 @@ for e in doc.modelspace():
                 && Near(x.Numbers[2], g.Input.FormerOuterDiameterMm / 2 + kerf / 2));
             foreach (var m in v.Marks)
             {
-                var at = v.Centre + m.OnContour;
-                Assert.Contains(e, x => x.Kind == "LINE" && x.Layer == "MARK" && Near(x.Numbers[0], at.X) && Near(x.Numbers[1], at.Y));
+                // A tick from the contour where the wire crosses; a circle where an element ends inside.
+                var at = v.Centre + (m.Kind == FaceMarkKind.Crossing ? m.OnContour : m.Inner);
+                var kind = m.Kind == FaceMarkKind.Crossing ? "LINE" : "CIRCLE";
+                Assert.Contains(e, x => x.Kind == kind && x.Layer == "MARK" && Near(x.Numbers[0], at.X) && Near(x.Numbers[1], at.Y));
             }
             Assert.Contains(e, x => x.Kind == "TEXT" && x.Text.Contains($"RING {v.RingNumber} {(v.Face == RingFace.Top ? "TOP" : "BOTTOM")}"));
         }
@@ -145,22 +147,6 @@ for e in doc.modelspace():
             Assert.Contains(holes, h => Near(h.Numbers[0], p.X) && Near(h.Numbers[1], p.Y));
         Assert.Contains(e, x => x.Kind == "TEXT" && x.Text.Contains("MIRRORED"));
         Assert.Contains(e, x => x.Kind == "TEXT" && x.Text.Contains("DEG FROM THE AXIS"));
-    }
-
-    [SkippableFact]
-    public void DrillingAngleIsTheChordOverTheRingThickness()
-    {
-        // A straight hole from the top-face hole to the bottom-face hole on the same circle: its
-        // tilt from the axis is atan(chord / thickness), chord = 2·r·sin(Δφ/2).
-        var g = RenderedSets.Geometry(nameof(BuildInputs.LeftSixOnLetter));
-        var top = DrillTemplates.Views(g).First(v => v.Face == RingFace.Top);
-        var h = top.Holes[0];
-        var chord = (h.Centre - h.ExitSeenFromHere).Length;
-        Assert.Equal(Math.Atan2(chord, g.RingThicknessMm) * 180 / Math.PI, h.AngleFromNormalDeg, 9);
-        // With one ring taller than the element, the hole joins the element's two ends, so the
-        // chord spans the whole arc angle.
-        var r = DrillTemplates.HoleCircleRadiusMm(g);
-        Assert.Equal(2 * r * Math.Sin(g.ArcAngleRad / 2), chord, 9);
     }
 
     private static bool Near(double a, double b) => Math.Abs(a - b) <= 0.001;

@@ -8,7 +8,8 @@ namespace Helipol.Emit.Dxf;
 /// bottom face (drawn as seen from below, so mirrored, and labelled so) show the hole centres on
 /// layer DRILL as circles of the hole diameter, a line on MARK from each hole toward where it
 /// leaves the other face, the ring outline and azimuth-0 tick on GUIDE, and the hole size and
-/// drilling angle on TEXT.
+/// drilling angle (and depth of blind holes, where an element ends inside the ring) on TEXT; an
+/// element's end inside a ring is a cross on MARK on the face beyond it.
 /// </summary>
 public static class DrillDxf
 {
@@ -23,7 +24,7 @@ public static class DrillDxf
         var top = views.Max(v => v.Centre.Y + v.OuterRadiusMm) + 9;
         doc.Text("TEXT", new Point2(0, top + 4), 2.5, DxfText.Clean($"{g.Input.DesignName} DRILL GUIDE"));
         doc.Text("TEXT", new Point2(0, top), 2.0, string.Create(ci,
-            $"HOLES DIA {DrillTemplates.HoleDiameterMm(g):0.00} MM. DRILL FROM EACH TOP-FACE HOLE ALONG ITS LINE, TILTED FROM THE AXIS BY THE ANGLE GIVEN (DEG FROM THE AXIS)."));
+            $"HOLES DIA {DrillTemplates.HoleDiameterMm(g):0.00} MM. DRILL FROM EACH HOLE ALONG ITS LINE, TILTED FROM THE AXIS BY THE ANGLE GIVEN (DEG FROM THE AXIS), THROUGH OR TO THE DEPTH GIVEN."));
         doc.Text("TEXT", new Point2(0, top - 3.5), 2.0, "BOTTOM FACES ARE DRAWN MIRRORED, AS SEEN FROM BELOW, TO CHECK WHERE EACH HOLE COMES OUT.");
         foreach (var v in views)
         {
@@ -36,20 +37,39 @@ public static class DrillDxf
             {
                 doc.Circle("DRILL", c + h.Centre, h.DiameterMm / 2);
                 doc.Line("MARK", c + h.Centre, c + h.ExitSeenFromHere);
-                var label = h.Centre.Length > 0 ? (1 / h.Centre.Length) * h.Centre : new Point2(1, 0);
-                doc.Text("TEXT", c + (v.OuterRadiusMm + 2.5) * label - new Point2(0.7, 0.9), 1.8, h.ElementNumber.ToString(ci));
+                Label(doc, c, v, h.Centre, h.ElementNumber);
+            }
+            // An element's end inside the ring: a cross, not a hole (nothing is drilled from this face there).
+            foreach (var end in v.Ends)
+            {
+                var s = 0.6;
+                doc.Line("MARK", c + end.Centre - new Point2(s, s), c + end.Centre + new Point2(s, s));
+                doc.Line("MARK", c + end.Centre - new Point2(s, -s), c + end.Centre + new Point2(s, -s));
+                Label(doc, c, v, end.Centre, end.ElementNumber);
             }
             var below = c + new Point2(-v.OuterRadiusMm - 4, -v.OuterRadiusMm - 6.5);
-            doc.Text("TEXT", below, 2.2, DxfText.Clean($"RING {v.RingNumber} {(v.Face == RingFace.Top ? "TOP" : "BOTTOM")}"));
-            var next = below - new Point2(0, 3);
-            if (v.Face == RingFace.Bottom)
+            var lines = new List<(double Height, string Text)> { (2.2, $"RING {v.RingNumber} {(v.Face == RingFace.Top ? "TOP" : "BOTTOM")}") };
+            if (v.Face == RingFace.Bottom) lines.Add((1.8, "MIRRORED"));
+            foreach (var (through, depth, tilt) in v.Holes.Select(h => (h.Through, Math.Round(h.DepthMm, 2), Math.Round(h.AngleFromNormalDeg, 1))).Distinct())
+                lines.Add((1.8, through
+                    ? string.Create(ci, $"THROUGH, TILT {tilt:0.0} DEG")
+                    : string.Create(ci, $"BLIND {depth:0.00} MM DEEP, TILT {tilt:0.0} DEG")));
+            foreach (var depth in v.Ends.Select(e => Math.Round(e.DepthMm, 2)).Distinct())
+                lines.Add((1.8, string.Create(ci, $"X: ELEMENT END {depth:0.00} MM IN")));
+            if (v.Enclosed.Count > 0)
+                lines.Add((1.8, $"ELEMENTS {string.Join(",", v.Enclosed)} REACH NO FACE"));
+            foreach (var (height, text) in lines)
             {
-                doc.Text("TEXT", next, 1.8, "MIRRORED");
-                next -= new Point2(0, 3);
+                doc.Text("TEXT", below, height, DxfText.Clean(text));
+                below -= new Point2(0, 3);
             }
-            if (v.Holes.Count > 0)
-                doc.Text("TEXT", next, 1.8, string.Create(ci, $"TILT {v.Holes.Max(h => h.AngleFromNormalDeg):0.0} DEG"));
         }
         return doc.ToBytes();
+    }
+
+    private static void Label(DxfDocument doc, Point2 c, DrillFaceView v, Point2 at, int number)
+    {
+        var label = at.Length > 0 ? (1 / at.Length) * at : new Point2(1, 0);
+        doc.Text("TEXT", c + (v.OuterRadiusMm + 2.5) * label - new Point2(0.7, 0.9), 1.8, number.ToString(CultureInfo.InvariantCulture));
     }
 }

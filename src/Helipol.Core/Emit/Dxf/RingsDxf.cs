@@ -6,7 +6,7 @@ namespace Helipol.Emit.Dxf;
 /// <summary>
 /// rings.dxf: foam rings nested on the board for laser, CNC or knife. Layer CUT holds the
 /// kerf-compensated contours (outer with the orientation notch, bore), MARK the element marks to
-/// score or draw, TEXT the labels, BOARD the stock outline, GUIDE the mirrored bottom-face views
+/// score or draw (ticks where a wire crosses the face, circles where an element ends inside the ring), TEXT the labels, BOARD the stock outline, GUIDE the mirrored bottom-face views
 /// drawn under the board for marking each ring's underside by hand (never cut).
 /// </summary>
 public static class RingsDxf
@@ -23,7 +23,7 @@ public static class RingsDxf
             doc.Rectangle("BOARD", origin, i.BoardWidthMm, i.BoardHeightMm);
             doc.Text("TEXT", origin + new Point2(2, i.BoardHeightMm + 2), 3,
                 DxfText.Clean(string.Create(CultureInfo.InvariantCulture,
-                    $"BOARD {i.BoardWidthMm:0.#} X {i.BoardHeightMm:0.#} X {i.BoardThicknessMm:0.#} MM, KERF {i.KerfMm:0.###} MM, RINGS {g.RingThicknessMm:0.##} MM THICK, TICKS WHERE EACH ELEMENT MEETS THE FACE")));
+                    $"BOARD {i.BoardWidthMm:0.#} X {i.BoardHeightMm:0.#} X {i.BoardThicknessMm:0.#} MM, KERF {i.KerfMm:0.###} MM, RINGS {g.RingThicknessMm:0.##} MM THICK, TICKS WHERE AN ELEMENT CROSSES THE FACE, CIRCLES WHERE ONE ENDS INSIDE THE RING")));
         }
         foreach (var v in RingTemplates.NestedTopFaces(g)) DrawView(doc, v, "CUT", g);
         var guides = RingTemplates.BottomFaceGuides(g);
@@ -44,12 +44,16 @@ public static class RingsDxf
         doc.Circle(contourLayer, c, v.CutBoreRadiusMm);
         foreach (var m in v.Marks)
         {
-            doc.Line("MARK", c + m.OnContour, c + m.Inner);
+            // A tick where the wire crosses the face; a small circle where an element ends inside the ring.
+            if (m.Kind == FaceMarkKind.Crossing) doc.Line("MARK", c + m.OnContour, c + m.Inner);
+            else doc.Circle("MARK", c + m.Inner, RingTemplates.EndMarkRadiusMm);
             doc.Text("TEXT", c + m.LabelAt - new Point2(0.7, 0.9), 1.8, m.ElementNumber.ToString(CultureInfo.InvariantCulture));
         }
         var below = c + new Point2(-v.HalfSizeMm + 1, -v.HalfSizeMm - 2.5);
         doc.Text("TEXT", below, 2.2, DxfText.Clean($"RING {v.RingNumber} {(v.Face == RingFace.Top ? "TOP" : "BOTTOM")}"));
-        if (v.Face == RingFace.Bottom) doc.Text("TEXT", below - new Point2(0, 3), 1.8, "MIRRORED");
-        doc.Text("TEXT", below - new Point2(0, v.Face == RingFace.Bottom ? 6 : 3), 1.8, DxfText.Clean(g.Input.DesignName));
+        var next = below - new Point2(0, 3);
+        if (v.Face == RingFace.Bottom) { doc.Text("TEXT", next, 1.8, "MIRRORED"); next -= new Point2(0, 3); }
+        doc.Text("TEXT", next, 1.8, DxfText.Clean(g.Input.DesignName));
+        if (RingTemplates.EndNote(v) is { } note) doc.Text("TEXT", next - new Point2(0, 3), 1.8, DxfText.Clean(note));
     }
 }

@@ -5,7 +5,8 @@ using Helipol.Geometry;
 namespace Helipol.Emit.Sheet;
 
 /// <summary>Draws one ring face at 1:1 for cutting by hand: the part's true outline (no kerf: a
-/// knife removes next to nothing), the orientation notch, the element marks and numbers.</summary>
+/// knife removes next to nothing), the orientation notch, the element marks and numbers: a tick
+/// where a wire crosses the face, a small circle where an element ends inside the ring.</summary>
 internal static class RingTemplatePainter
 {
     public static void Paint(SheetPen pen, RingFaceView v, double cx, double cy, string designName)
@@ -34,12 +35,14 @@ internal static class RingTemplatePainter
         {
             var (x0, y0) = P(Point2.Polar(r, RingFaceView.DrawingAngle(v.Face, m.AzimuthRad)));
             var (x1, y1) = P(Point2.Polar(r - RingTemplates.MarkLengthMm, RingFaceView.DrawingAngle(v.Face, m.AzimuthRad)));
-            pen.Line(x0, y0, x1, y1, 0.4);
+            if (m.Kind == FaceMarkKind.Crossing) pen.Line(x0, y0, x1, y1, 0.4);
+            else pen.Circle(x1, y1, RingTemplates.EndMarkRadiusMm, 0.3);
             var (lx, ly) = P(Point2.Polar(r + 2.5, RingFaceView.DrawingAngle(v.Face, m.AzimuthRad)));
             pen.Text(m.ElementNumber.ToString(CultureInfo.InvariantCulture), lx, ly + 1, 2.6, SKTextAlign.Center);
         }
         var face = v.Face == RingFace.Top ? "top face" : "bottom face, mirrored (lay the ring face down)";
         pen.Text($"Ring {v.RingNumber}, {face}", cx - r - 4, cy + r + 8, 2.8);
         pen.Text(designName, cx - r - 4, cy + r + 11.5, 2.4, grey: true);
+        if (RingTemplates.EndNote(v) is { } note) pen.Text(note + " from this face", cx - r - 4, cy + r + 15, 2.4);
     }
 }
