@@ -32,4 +32,37 @@ public class WrapTemplateTests
             Assert.Equal(Math.Sqrt(run * run + input.ElementRiseMm * input.ElementRiseMm), grp.Sum(l => (l.To - l.From).Length), 6);
         Assert.Equal(input.ElementCount, wrap.Lines.Select(l => l.ElementNumber).Distinct().Count());
     }
+
+    public static IEnumerable<object[]> AllInputs() => [["Typical"], ["LeftSixOnLetter"], ["Large"], ["LeftLarge"]];
+
+    [Theory]
+    [MemberData(nameof(AllInputs))]
+    public void NumbersStayClearOfEveryLine(string name)
+    {
+        // A number a line runs through cannot be read (common practice, no source). Each number's
+        // box (WrapTemplate.LabelBoxMm) must lie inside the strip, keep the line's half stroke
+        // (0.15 mm) plus a little clear of every line drawn, and sit within 5 mm of its element's
+        // lower end so it is read as that line's number.
+        var input = name == "LeftLarge"
+            ? BuildInputs.Large with { Winding = HelixWinding.Left, Sense = CircularSense.Lhcp }
+            : BuildInputs.ByName(name);
+        var wrap = WrapTemplate.From(new PolarizerGeometry(input));
+        Assert.Equal(input.ElementCount, wrap.Labels.Count);
+        foreach (var label in wrap.Labels)
+        {
+            var (w, h) = WrapTemplate.LabelBoxMm(label.ElementNumber.ToString().Length);
+            var (x0, y0) = (label.BaselineLeft.X, label.BaselineLeft.Y);
+            Assert.InRange(x0, 0, wrap.WidthMm - w);
+            Assert.InRange(y0, 0, wrap.HeightMm - h);
+            Assert.True((label.BaselineLeft - label.LowerEnd).Length < 5, $"number {label.ElementNumber} is far from its line");
+            const double clear = 0.2;
+            foreach (var line in wrap.Lines)
+                for (var k = 0; k <= 2000; k++)
+                {
+                    var p = line.From + (k / 2000.0) * (line.To - line.From);
+                    var inside = p.X > x0 - clear && p.X < x0 + w + clear && p.Y > y0 - clear && p.Y < y0 + h + clear;
+                    Assert.False(inside, $"element {line.ElementNumber}'s line runs through number {label.ElementNumber}");
+                }
+        }
+    }
 }

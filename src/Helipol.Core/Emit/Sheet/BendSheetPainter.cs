@@ -98,7 +98,7 @@ public static class BendSheetPainter
                 WrapTemplatePart(pen, wrap, part, pieces, pieceW, m, first ? top + 8 : top);
             });
         }
-        yield return new Block(8, (pen, top) =>
+        yield return new Block(4, (pen, top) =>
             pen.Text(string.Create(ci, $"{wrap.WidthMm:0.00} mm = one turn of the former; numbers at each element's lower end"), m, top, 2.4, grey: true));
 
         // 3. Arc bend template and 4. winding drawing, side by side.
@@ -168,14 +168,13 @@ public static class BendSheetPainter
         foreach (var line in wrap.Lines)
             pen.Line(x + line.From.X - from, y + wrap.HeightMm - line.From.Y, x + line.To.X - from, y + wrap.HeightMm - line.To.Y, 0.3);
         pen.Canvas.Restore();
-        foreach (var line in wrap.Lines.GroupBy(l => l.ElementNumber).Select(grp => grp.First()))
+        foreach (var label in wrap.Labels)
         {
-            var lx = line.From.X - from;
-            // A line that starts on the right edge (a left winding's first element wraps at once)
-            // still gets its number, set inside the strip.
-            if (lx >= 0 && lx <= w + 1e-9)
-                pen.Text(line.ElementNumber.ToString(CultureInfo.InvariantCulture), x + (lx > w - 4 ? lx - 3.2 : lx + 0.8),
-                    y + wrap.HeightMm - line.From.Y - 0.8, 2.4);
+            // Each number is drawn on the part that holds its element's lower end.
+            var sx = label.LowerEnd.X - from;
+            if (sx < 0 || sx > w + 1e-9 || (sx == 0 && p > 0)) continue;
+            pen.Text(label.ElementNumber.ToString(CultureInfo.InvariantCulture), x + label.BaselineLeft.X - from,
+                y + wrap.HeightMm - label.BaselineLeft.Y, WrapTemplate.LabelSizeMm);
         }
     }
 
