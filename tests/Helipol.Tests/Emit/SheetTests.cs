@@ -134,8 +134,8 @@ public class SheetTests
         foreach (var page in pdf.GetPages())
         {
             AssertPaper(PaperSize.A4, page.Width, page.Height);
-            Assert.All(page.Letters, l => Assert.True(l.GlyphRectangle.Bottom >= 0 && l.GlyphRectangle.Top <= page.Height,
-                $"'{l.Value}' at y = {l.GlyphRectangle.Bottom:0.0} pt lies off page {page.Number}"));
+            Assert.All(page.Letters, l => Assert.True(l.BoundingBox.Bottom >= 0 && l.BoundingBox.Top <= page.Height,
+                $"'{l.Value}' at y = {l.BoundingBox.Bottom:0.0} pt lies off page {page.Number}"));
         }
         if (file == "bend-sheet.pdf")
         {
