@@ -49,7 +49,7 @@ public static class BandSweep
         var cone = ObservationSet.Cone(elevation, design.Solve.AzimuthStepRad);
         var sense = design.Polarizer.Sense;
         var pol = PolarizerEvaluator.Evaluate(build, freqs, cone, sense, counter);
-        var bare = PolarizerEvaluator.SampleBareWhip(design.Whip.Kind, design.Whip.LengthM, design.Whip.RadiusM, freqs, cone, counter)
+        var bare = PolarizerEvaluator.SampleBareWhip(design.Whip.Kind, design.Whip.LengthM, design.Whip.RadiusM, freqs, cone, counter, meshFrequencyHz: build.MeshFrequencyHz)
             .Select(s => s.Summarize(sense)).ToArray();
         var sweep = pol.Select((p, i) => new SweepPoint(p, bare[i].Vswr50, bare[i].GainDbic(sense))).ToArray();
 
