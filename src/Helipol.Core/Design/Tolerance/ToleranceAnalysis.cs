@@ -16,7 +16,8 @@ public sealed record ToleranceResult(
     double ArPerMmRiseDb,
     double BestArMHzPerMmLength,
     double BestArMHzPerMmRise,
-    double TrimMm,
+    double BestArFrequencyHz,
+    double LengthChangeToCentreMm,
     string TrimmingHint,
     long FieldSolves);
 
@@ -33,9 +34,6 @@ public static class ToleranceAnalysis
 {
     public const double PassArDb = 3;
     public const double AzimuthStepRad = 10 * Math.PI / 180;
-
-    /// <summary>Length trimmed in the hint at 5.8 GHz, m (scaled with wavelength).</summary>
-    public const double TrimAt5800MHzM = 0.3e-3;
 
     public static ToleranceResult Run(PolarizerDesign design, PolarizerBuild nominal, int? builds = null, FieldSolveCounter? counter = null)
     {
@@ -79,13 +77,10 @@ public static class ToleranceAnalysis
         double arH = (Ar(Shift(0, step)) - Ar(Shift(0, -step))) / (2 * step * 1e3);
         double fL = (BestArFrequencyHz(design, Shift(step, 0), counter) - BestArFrequencyHz(design, Shift(-step, 0), counter)) / (2 * step * 1e3) / 1e6;
         double fH = (BestArFrequencyHz(design, Shift(0, step), counter) - BestArFrequencyHz(design, Shift(0, -step), counter)) / (2 * step * 1e3) / 1e6;
-        double trim = TrimAt5800MHzM * scale;
-        double move = -trim * 1e3 * fL;
-        string hint = double.IsFinite(move)
-            ? FormattableString.Invariant($"trimming {trim * 1e3:0.0#} mm off every element moves the best-AR frequency {(move >= 0 ? "up" : "down")} about {Math.Abs(move):0} MHz")
-            : "no trimming hint: the axial ratio has no minimum within ±8 % of the band centre, so trimming cannot be tied to a best-AR frequency";
+        double best = BestArFrequencyHz(design, nominal, counter);
+        var advice = TrimmingHint.For(design.Band.CenterHz, best, fL, PolarizerSearch.PolishStepAt5800MHzM * scale * 1e3, t.ElementLengthM * 1e3);
         return new ToleranceResult(count, t.Seed, yield, worst, Percentile(sorted, 0.1), Percentile(sorted, 0.5), Percentile(sorted, 0.9),
-            arL, arH, fL, fH, trim, hint, counter.Count - before);
+            arL, arH, fL, fH, best, advice.LengthChangeMm, advice.Text, counter.Count - before);
     }
 
     /// <summary>

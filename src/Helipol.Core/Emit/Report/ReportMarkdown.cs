@@ -55,7 +55,7 @@ public static class ReportMarkdown
         L($"");
         L($"![axial ratio and gain](ar-gain.png)");
         L($"");
-        L($"On the analysis cone ({(sweep.ElevationRad == 0 ? "the horizon" : $"{sweep.ElevationRad * 180 / Math.PI:0.#}° above the ground")}, every 5° of azimuth) the best axial ratio is {sweep.BestArDb:0.0} dB at {sweep.BestArFrequencyHz / 1e6:0.#} MHz. {Bandwidth(sweep, centre)}");
+        L($"On the analysis cone ({(sweep.ElevationRad == 0 ? "the horizon" : $"{sweep.ElevationRad * 180 / Math.PI:0.#}° above the ground")}, every 5° of azimuth) {BestAr(sweep)} {Bandwidth(sweep, centre)}");
         L($"");
         var mid = sweep.Points.OrderBy(p => Math.Abs(p.Polarizer.FrequencyHz - centre)).First();
         L($"## Against the bare whip");
@@ -82,7 +82,7 @@ public static class ReportMarkdown
         L($"- worst AR percentiles: 10 % {tolerance.ArP10Db:0.0} dB, median {tolerance.ArP50Db:0.0} dB, 90 % {tolerance.ArP90Db:0.0} dB");
         L($"- sensitivity at the centre: {tolerance.ArPerMmLengthDb:+0.0;−0.0} dB of AR per mm of length, {tolerance.ArPerMmRiseDb:+0.0;−0.0} dB per mm of rise");
         if (double.IsFinite(tolerance.BestArMHzPerMmLength) && double.IsFinite(tolerance.BestArMHzPerMmRise))
-            L($"- best-AR frequency: {tolerance.BestArMHzPerMmLength:+0;−0} MHz per mm of length, {tolerance.BestArMHzPerMmRise:+0;−0} MHz per mm of rise");
+            L($"- best-AR frequency: {tolerance.BestArMHzPerMmLength:+0.0;−0.0} MHz per mm of length, {tolerance.BestArMHzPerMmRise:+0.0;−0.0} MHz per mm of rise");
         else
             L($"- best-AR frequency: no minimum within ±8 % of the centre, so its sensitivity is not defined");
         L($"- {tolerance.TrimmingHint}.");
@@ -103,6 +103,11 @@ public static class ReportMarkdown
     private static bool RuleAgrees(SolvedPolarizer s) => PracticeScaling.WindingFor(s.Sense) == s.Winding;
 
     private static string Worst(PracticeComparison p) => p.ObjectiveDb is null ? "not modelled" : string.Create(CultureInfo.InvariantCulture, $"{p.Points.Max(x => x.WorstScoreDb):0.0} dB");
+
+    /// <summary>The best AR of the sweep, or, when its lowest point is a sweep edge, that the minimum lies beyond it.</summary>
+    public static string BestAr(SweepResult sweep) => sweep.BestArInsideSweep
+        ? string.Create(CultureInfo.InvariantCulture, $"the best axial ratio is {sweep.BestArDb:0.0} dB at {sweep.BestArFrequencyHz / 1e6:0.#} MHz.")
+        : string.Create(CultureInfo.InvariantCulture, $"the axial ratio is still falling at the sweep's {(sweep.BestArAtTopEdge ? "top" : "bottom")} edge ({sweep.BestArDb:0.0} dB at {sweep.BestArFrequencyHz / 1e6:0.#} MHz), so its minimum lies {(sweep.BestArAtTopEdge ? "above" : "below")} the sweep.");
 
     private static string Bandwidth(SweepResult sweep, double centre) => sweep.BandwidthHz > 0
         ? string.Create(CultureInfo.InvariantCulture, $"AR stays ≤ 3 dB from {sweep.BandwidthLowHz / 1e6:0.#} to {sweep.BandwidthHighHz / 1e6:0.#} MHz: {sweep.BandwidthHz / 1e6:0.#} MHz, {sweep.BandwidthHz / centre * 100:0.##} % of the centre frequency.")

@@ -75,6 +75,7 @@ public static class SolvedJson
                 Number(j, "elevation_deg", sweep.ElevationRad * 180 / Math.PI);
                 Number(j, "best_axial_ratio_frequency_hz", sweep.BestArFrequencyHz);
                 Number(j, "best_axial_ratio_db", sweep.BestArDb);
+                j.WriteBoolean("best_axial_ratio_inside_sweep", sweep.BestArInsideSweep);
                 Number(j, "axial_ratio_3db_low_hz", sweep.BandwidthLowHz);
                 Number(j, "axial_ratio_3db_high_hz", sweep.BandwidthHighHz);
                 Number(j, "axial_ratio_3db_bandwidth_hz", sweep.BandwidthHz);
@@ -103,6 +104,8 @@ public static class SolvedJson
                 Number(j, "axial_ratio_db_per_mm_rise", tolerance.ArPerMmRiseDb);
                 Number(j, "best_ar_mhz_per_mm_length", tolerance.BestArMHzPerMmLength);
                 Number(j, "best_ar_mhz_per_mm_rise", tolerance.BestArMHzPerMmRise);
+                Number(j, "best_ar_frequency_hz", tolerance.BestArFrequencyHz);
+                Number(j, "length_change_to_centre_mm", tolerance.LengthChangeToCentreMm);
                 j.WriteString("trimming_hint", tolerance.TrimmingHint);
                 j.WriteNumber("field_solves", tolerance.FieldSolves);
                 j.WriteEndObject();
