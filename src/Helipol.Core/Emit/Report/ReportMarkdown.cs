@@ -44,7 +44,7 @@ public static class ReportMarkdown
         foreach (var step in s.Search.Steps) L($"- {step}");
         L($"- {s.Search.Evaluations} geometries scored, {s.FieldSolves} field solves in all.");
         L($"");
-        L($"Dielectric around the elements (former contact, glue, wrap) enters as an effective coating (Richmond and Newman's coated-wire inductance, partial coverage by mixing, see Design/Wires/EffectiveCoating.cs) with calibration factor {s.Calibration.Factor:0.###} for {s.Calibration.MaterialSet}: {s.Calibration.Source}; {s.Calibration.FittedBy}.");
+        L($"Dielectric around the elements (former contact, glue, wrap) enters as an effective coating (Richmond and Newman's coated-wire inductance, partial coverage by mixing, see Design/Wires/EffectiveCoating.cs) with {s.Calibration.DescribeFor(design.Polarizer)}: {s.Calibration.Source}; {s.Calibration.FittedBy}.");
         L($"");
         L($"## Band");
         L($"");

@@ -18,7 +18,7 @@ public static class SolvedJson
     public static string Write(PolarizerDesign design, SolvedPolarizer solved, SweepResult? sweep = null, ToleranceResult? tolerance = null)
     {
         var root = JsonNode.Parse(DesignJson.Write(design))!.AsObject();
-        root["solved"] = JsonNode.Parse(SolvedObject(solved, sweep, tolerance));
+        root["solved"] = JsonNode.Parse(SolvedObject(design, solved, sweep, tolerance));
         using var buffer = new MemoryStream();
         using (var json = new Utf8JsonWriter(buffer, Options)) root.WriteTo(json);
         return Encoding.UTF8.GetString(buffer.ToArray()) + "\n";
@@ -26,7 +26,7 @@ public static class SolvedJson
 
     private static readonly JsonWriterOptions Options = new() { Indented = true, NewLine = "\n", Encoder = JavaScriptEncoder.UnsafeRelaxedJsonEscaping };
 
-    private static string SolvedObject(SolvedPolarizer s, SweepResult? sweep, ToleranceResult? tolerance)
+    private static string SolvedObject(PolarizerDesign design, SolvedPolarizer s, SweepResult? sweep, ToleranceResult? tolerance)
     {
         using var buffer = new MemoryStream();
         using (var j = new Utf8JsonWriter(buffer, Options))
@@ -44,6 +44,8 @@ public static class SolvedJson
             j.WriteEndObject();
             j.WriteStartObject("calibration");
             j.WriteString("material_set", s.Calibration.MaterialSet);
+            j.WriteString("design_material_set", CoatingCalibration.MaterialSetOf(design.Polarizer));
+            j.WriteBoolean("borrowed", s.Calibration.IsBorrowedFor(design.Polarizer));
             Number(j, "loading_factor", s.Calibration.Factor);
             j.WriteString("fitted_by", s.Calibration.FittedBy);
             j.WriteString("source", s.Calibration.Source);
