@@ -44,6 +44,13 @@ public static class ReportMarkdown
         foreach (var step in s.Search.Steps) L($"- {step}");
         L($"- {s.Search.Evaluations} geometries scored, {s.FieldSolves} field solves in all.");
         L($"");
+        L($"The step figures are objective scores (axial ratio in dB less the weighted gain), not axial ratios; the band table below gives the axial ratio itself.");
+        if (s.Search.LimitsReached.Count > 0)
+        {
+            L($"");
+            L($"**At a search limit:** {string.Join("; ", s.Search.LimitsReached)}. The objective may keep improving beyond it: widen that range (or change the limit) in the design file and solve again.");
+        }
+        L($"");
         L($"Dielectric around the elements (former contact, glue, wrap) enters as an effective coating (Richmond and Newman's coated-wire inductance, partial coverage by mixing, see Design/Wires/EffectiveCoating.cs) with {s.Calibration.DescribeFor(design.Polarizer)}: {s.Calibration.Source}; {s.Calibration.FittedBy}.");
         L($"");
         L($"## Band");
@@ -70,7 +77,10 @@ public static class ReportMarkdown
         L($"");
         L($"## Axial-ratio map");
         L($"");
-        L($"The coarse search map over element length × rise ({s.Search.Map.ElementCount} elements on {s.Search.Map.OuterDiameterM * 1e3:0.#} mm; blank cells cannot be built). The cross marks the solution.");
+        if (s.Search.Map.LengthsM.Length * s.Search.Map.RisesM.Length == 1)
+            L($"Element length and rise are both pinned, so there was no map to search: the plot holds the one geometry as written.");
+        else
+            L($"The coarse search map over element length × rise ({s.Search.Map.ElementCount} elements on {s.Search.Map.OuterDiameterM * 1e3:0.#} mm; blank cells cannot be built). The cross marks the solution.");
         L($"");
         L($"![axial-ratio map](ar-map.png)");
         L($"");

@@ -69,6 +69,9 @@ public static class SolvedJson
             j.WriteStartArray("steps");
             foreach (var step in s.Search.Steps) j.WriteStringValue(step);
             j.WriteEndArray();
+            j.WriteStartArray("limits_reached");
+            foreach (var limit in s.Search.LimitsReached) j.WriteStringValue(limit);
+            j.WriteEndArray();
             j.WriteEndObject();
 
             if (sweep is not null)
