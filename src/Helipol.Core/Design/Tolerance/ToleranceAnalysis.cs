@@ -27,8 +27,9 @@ public sealed record ToleranceResult(
 /// evaluate them. Each element gets its own length, rise and azimuth error (uniform within the
 /// design's ± spreads); each build one wrap-thickness error. A build passes when its worst axial
 /// ratio in the wanted sense is ≤ 3 dB at the band's low, centre and high frequency on the analysis
-/// cone, every 10° of azimuth: fewer points than the solve uses, to keep 500 builds near 5 s on two
-/// cores. A build whose wires would touch counts as failed.
+/// cone, every 10° of azimuth: fewer points than the solve uses, so 500 builds take about a second on
+/// two cores (figures from <c>make bench</c> in the README). A build whose wires would touch counts as failed.
+/// The trimming hint is <see cref="TrimmingHint"/> on the nominal build's best-AR frequency and its slope.
 /// </summary>
 public static class ToleranceAnalysis
 {

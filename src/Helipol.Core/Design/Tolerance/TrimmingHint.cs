@@ -11,8 +11,9 @@ public sealed record TrimmingAdvice(double LengthChangeMm, string Text);
 /// element length (MHz per mm, from central differences) and the band centre f_c give, to first
 /// order (a Taylor step on a locally linear response), the length change ΔL = (f_c − f_best) / s that
 /// moves the best AR to the centre. Longer elements resonate lower (s &lt; 0), so a best AR below the
-/// centre asks for a trim and one above it for longer elements. A change under half the finest
-/// trim a builder makes is not worth a cut; one beyond the design's length tolerance is flagged,
+/// centre asks for a trim and one above it for longer elements. A change under half the search's
+/// final step (the finest trim a builder makes, and the resolution the length was solved to) is not
+/// worth a cut; one beyond the design's length tolerance is flagged,
 /// since it is larger than the scatter of the builds themselves. Figures are printed with enough
 /// digits that slope × change gives the stated offset.
 /// </summary>
@@ -28,7 +29,7 @@ public static class TrimmingHint
         string where = string.Create(inv, $"the model's best AR is at {bestArHz / 1e6:0.#} MHz, {Math.Abs(offsetMHz):0.#} MHz {(offsetMHz >= 0 ? "above" : "below")} the {centreHz / 1e6:0.#} MHz centre");
         string slope = string.Create(inv, $"{mhzPerMmLength:+0.0;−0.0} MHz per mm of length");
         if (Math.Abs(change) < finestTrimMm / 2)
-            return new(change, string.Create(inv, $"no trimming needed: {where}; at {slope} that is a {Math.Abs(change):0.00} mm change, under half the finest {finestTrimMm:0.0#} mm trim"));
+            return new(change, string.Create(inv, $"no trimming needed: {where}; at {slope} that is a {Math.Abs(change):0.00} mm change, under half the {finestTrimMm:0.0#} mm step the length was solved to"));
         string text = change < 0
             ? string.Create(inv, $"trim {-change:0.00} mm off every element: {where}, and at {slope} {-change:0.00} mm shorter moves it up to the centre")
             : string.Create(inv, $"cut the elements {change:0.00} mm longer (a cut wire cannot be lengthened): {where}, and at {slope} {change:0.00} mm longer moves it down to the centre");
