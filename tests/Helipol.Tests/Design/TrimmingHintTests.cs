@@ -21,6 +21,7 @@ public class TrimmingHintTests
         Assert.StartsWith("trim 1.00 mm off every element", a.Text);
         Assert.Contains("moves it up", a.Text);
         Assert.DoesNotContain("tolerance", a.Text);
+        Assert.Equal("trim every element 1.00 mm (best AR 5700 MHz)", a.Summary);
     }
 
     [Fact]
@@ -33,6 +34,7 @@ public class TrimmingHintTests
         Assert.Contains("moves it down", a.Text);
         Assert.Contains("more than the ±1 mm length tolerance", a.Text);
         Assert.DoesNotContain("trim 1", a.Text);
+        Assert.StartsWith("lengthen every element 1.19 mm", a.Summary);
     }
 
     // A best AR 26 MHz above 5800 MHz at −381 MHz/mm needs 0.07 mm: below half of a 0.2 mm trim, so

@@ -19,6 +19,7 @@ public sealed record ToleranceResult(
     double BestArFrequencyHz,
     double LengthChangeToCentreMm,
     string TrimmingHint,
+    string TrimmingSummary,
     long FieldSolves);
 
 /// <summary>
@@ -81,7 +82,7 @@ public static class ToleranceAnalysis
         double best = BestArFrequencyHz(design, nominal, counter);
         var advice = TrimmingHint.For(design.Band.CenterHz, best, fL, PolarizerSearch.PolishStepAt5800MHzM * scale * 1e3, t.ElementLengthM * 1e3);
         return new ToleranceResult(count, t.Seed, yield, worst, Percentile(sorted, 0.1), Percentile(sorted, 0.5), Percentile(sorted, 0.9),
-            arL, arH, fL, fH, best, advice.LengthChangeMm, advice.Text, counter.Count - before);
+            arL, arH, fL, fH, best, advice.LengthChangeMm, advice.Text, advice.Summary, counter.Count - before);
     }
 
     /// <summary>

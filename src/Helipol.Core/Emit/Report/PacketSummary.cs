@@ -36,8 +36,10 @@ public static class PacketSummary
                 ? F($"{sweep.BandwidthHz / 1e6:0.#} MHz ({100 * sweep.BandwidthHz / sweep.BestArFrequencyHz:0.0} %)")
                 : "none: the axial ratio stays above 3 dB"),
             new("Tolerance yield", F($"{100 * tolerance.Yield:0.#} % of {tolerance.Builds} simulated builds reach AR <= 3 dB")),
-            new("Trimming", tolerance.TrimmingHint),
-            new("Coating calibration", F($"factor {solved.Calibration.Factor:0.###}")),
+            new("Trimming", tolerance.TrimmingSummary),
+            new("Coating calibration", solved.Calibration.IsBorrowedFor(design.Polarizer)
+                ? F($"factor {solved.Calibration.Factor:0.###}, borrowed from {solved.Calibration.MaterialSet}")
+                : F($"factor {solved.Calibration.Factor:0.###}, measured on {solved.Calibration.MaterialSet}")),
         ];
     }
 }
