@@ -82,8 +82,10 @@ public static class SolveVerb
         elements.AddRow("mean gain, wanted sense", Db(s.MeanGainDbic) + "ic", "", "field model");
         console.Write(elements);
         console.WriteLine(string.Create(CultureInfo.InvariantCulture,
-            $"Calibration factor {s.Calibration.Factor:0.###}: {s.Calibration.Source}."));
+            $"Calibration factor {s.Calibration.Factor:0.###}: {s.Calibration.Source}{(s.Calibration.IsBorrowedFor(d.Polarizer) ? $"; measured on {s.Calibration.MaterialSet}, borrowed for {CoatingCalibration.MaterialSetOf(d.Polarizer)}" : "")}."));
         console.WriteLine(string.Create(CultureInfo.InvariantCulture, $"{s.Search.Evaluations} geometries scored, {s.FieldSolves} field solves."));
+        foreach (var limit in s.Search.LimitsReached)
+            console.WriteLine($"At a search limit: {limit}; the optimum may lie beyond it.");
         console.WriteLine("Practice scaling: the 5.8 GHz rule of thumb scaled by wavelength; not a solved result.");
     }
 

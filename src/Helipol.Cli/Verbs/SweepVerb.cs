@@ -48,7 +48,7 @@ public static class SweepVerb
                     p.Polarizer.Vswr50.ToString("0.00", inv), p.BareWhipVswr50.ToString("0.00", inv));
             }
             console.Tables.Write(t);
-            console.Out.WriteLine(string.Create(inv, $"best AR {sweep.BestArDb:0.0} dB at {sweep.BestArFrequencyHz / 1e6:0.#} MHz; AR ≤ 3 dB bandwidth {sweep.BandwidthHz / 1e6:0.#} MHz ({sweep.BandwidthHz / design.Band.CenterHz * 100:0.##} %); {counter.Count} field solves"));
+            console.Out.WriteLine(string.Create(inv, $"{(sweep.BestArInsideSweep ? "best AR" : sweep.BestArAtTopEdge ? "AR minimum above the sweep; at its top edge" : "AR minimum below the sweep; at its bottom edge")} {sweep.BestArDb:0.0} dB at {sweep.BestArFrequencyHz / 1e6:0.#} MHz; AR ≤ 3 dB bandwidth {sweep.BandwidthHz / 1e6:0.#} MHz ({sweep.BandwidthHz / design.Band.CenterHz * 100:0.##} %); {counter.Count} field solves"));
             return ExitCodes.Ok;
         });
         return command;

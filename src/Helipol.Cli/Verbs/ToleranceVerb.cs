@@ -41,7 +41,7 @@ public static class ToleranceVerb
             console.Out.WriteLine(string.Create(inv, $"  worst AR: 10 % {t.ArP10Db:0.0} dB, median {t.ArP50Db:0.0} dB, 90 % {t.ArP90Db:0.0} dB"));
             console.Out.WriteLine(string.Create(inv, $"  AR per mm: {t.ArPerMmLengthDb:+0.0;-0.0} dB (length), {t.ArPerMmRiseDb:+0.0;-0.0} dB (rise)"));
             if (double.IsFinite(t.BestArMHzPerMmLength) && double.IsFinite(t.BestArMHzPerMmRise))
-                console.Out.WriteLine(string.Create(inv, $"  best-AR frequency per mm: {t.BestArMHzPerMmLength:+0;-0} MHz (length), {t.BestArMHzPerMmRise:+0;-0} MHz (rise)"));
+                console.Out.WriteLine(string.Create(inv, $"  best-AR frequency per mm: {t.BestArMHzPerMmLength:+0.0;-0.0} MHz (length), {t.BestArMHzPerMmRise:+0.0;-0.0} MHz (rise)"));
             else
                 console.Out.WriteLine("  best-AR frequency per mm: not defined (no AR minimum within ±8 % of the centre)");
             console.Out.WriteLine($"  {t.TrimmingHint}");

@@ -34,6 +34,13 @@ public sealed record PolarizerBuild(
     public int ElementCount => Elements.Count;
 
     /// <summary>
+    /// The frequency the wires are segmented for (see <see cref="MeshDensity"/>), Hz; null meshes
+    /// each evaluation for its own highest frequency. Kept through <c>with</c> so every variant of a
+    /// design's build shares the design's mesh density.
+    /// </summary>
+    public double? MeshFrequencyHz { get; init; }
+
+    /// <summary>
     /// A build with <paramref name="count"/> identical elements of length <paramref name="lengthM"/> and rise
     /// <paramref name="riseM"/>, element k starting at azimuth 360°·k/N (geometry convention).
     /// </summary>
@@ -47,7 +54,10 @@ public sealed record PolarizerBuild(
             Uniform(count, lengthM, riseM), p.Wire.RadiusM,
             p.Wire.IsPerfectConductor ? null : p.Wire.ConductivitySPerM!.Value,
             p.Wire.RelativePermeability.Value,
-            Surroundings.From(p, calibrationFactor));
+            Surroundings.From(p, calibrationFactor))
+        {
+            MeshFrequencyHz = MeshDensity.FrequencyHz(design),
+        };
     }
 
     /// <summary>N identical elements evenly spaced around the former.</summary>

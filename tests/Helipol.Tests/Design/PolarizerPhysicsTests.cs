@@ -88,6 +88,8 @@ public class PolarizerPhysicsTests
         var scaled = build.WithElements(3, 20e-3 * k, 12.7e-3 * k) with
         {
             WhipLengthM = build.WhipLengthM * k, WhipRadiusM = build.WhipRadiusM * k, OuterDiameterM = build.OuterDiameterM * k, WireRadiusM = build.WireRadiusM * k,
+            // The segments scale with the wavelength too, or the two models differ in mesh, not in physics.
+            MeshFrequencyHz = build.MeshFrequencyHz / k,
         };
         var a = PolarizerEvaluator.Evaluate(build, new[] { 5.8e9 }, Horizon, Sense.Rhcp)[0];
         var b = PolarizerEvaluator.Evaluate(scaled, new[] { 5.8e9 / k }, Horizon, Sense.Rhcp)[0];

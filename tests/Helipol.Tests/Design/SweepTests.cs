@@ -23,3 +23,34 @@ public class SweepTests
         Assert.Equal(lo, hi);
     }
 }
+
+/// <summary>A sweep whose lowest axial ratio is its last point has not found the minimum.</summary>
+public class SweepEdgeTests
+{
+    private static readonly Helipol.Model.PolarizerDesign Design = DesignFiles.Load("practice-foam-tape");
+
+    // The practice build's axial-ratio minimum lies near 5.96 GHz (README, "The practice rule against
+    // the model"), so over 5.0-5.5 GHz the AR still falls at the top: the report must say the minimum
+    // lies above the sweep, not call the last point the best.
+    [Fact]
+    public void AMinimumAtTheTopEdgeIsReportedAsAboveTheSweep()
+    {
+        var build = CalibrationFit.PinnedBuild(Design, CoatingCalibration.DefaultFactor) with { Winding = Helipol.Model.Winding.Left };
+        var sweep = BandSweep.Run(Design, build, points: 3, fromHz: 5.0e9, toHz: 5.5e9);
+        Assert.Equal(5.5e9, sweep.BestArFrequencyHz);
+        Assert.False(sweep.BestArInsideSweep);
+        Assert.True(sweep.BestArAtTopEdge);
+        var text = Helipol.Emit.Report.ReportMarkdown.BestAr(sweep);
+        Assert.Contains("minimum lies above the sweep", text);
+        Assert.DoesNotContain("the best axial ratio is", text);
+    }
+
+    [Fact]
+    public void AMinimumInsideTheSweepIsTheBest()
+    {
+        var build = CalibrationFit.PinnedBuild(Design, CoatingCalibration.DefaultFactor) with { Winding = Helipol.Model.Winding.Left };
+        var sweep = BandSweep.Run(Design, build, points: 5, fromHz: 5.5e9, toHz: 6.3e9);
+        Assert.True(sweep.BestArInsideSweep);
+        Assert.StartsWith("the best axial ratio is", Helipol.Emit.Report.ReportMarkdown.BestAr(sweep));
+    }
+}

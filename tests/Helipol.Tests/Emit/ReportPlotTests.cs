@@ -30,4 +30,21 @@ public class ReportPlotTests
         Assert.Equal(ReportPlots.AxialRatioMap(map, 20e-3, 10e-3, "t"), ReportPlots.AxialRatioMap(map, 20e-3, 10e-3, "t"));
         Assert.Equal((1, 0), map.Best());
     }
+
+    // The AR axis was autoscaled below the 40 dB cap, so the curve ran off the top of ar-gain.png.
+    // An axis set by hand must hold the highest value drawn, with room above it for the legend
+    // (a third of the span, common practice, no source), on a 5-unit step.
+    [Theory]
+    [InlineData(40, 0)]
+    [InlineData(3.1, 0)]
+    [InlineData(5.13, 1)]
+    [InlineData(3.2, -15.9)]
+    [InlineData(-2, -12)]
+    public void AxisTopHoldsTheDataWithRoomForTheLegend(double max, double low)
+    {
+        double top = ReportPlots.AxisTop(max, low);
+        Assert.True(top >= low + 1.3 * (max - low), $"top {top} for data {low}..{max}");
+        Assert.Equal(0, top % 5);
+        Assert.True(top - (low + 1.35 * (max - low)) < 5);
+    }
 }

@@ -44,6 +44,20 @@ public sealed record CoatingCalibration(string MaterialSet, double Factor, strin
             ? CalibrationFile.Read(reference.FullPath, reference.Written, Path.Combine(Path.GetDirectoryName(design.SourceFile) ?? "", reference.Written))
             : Default;
 
+    /// <summary>
+    /// True when this calibration was measured on other materials than <paramref name="p"/> is made of
+    /// (the built-in default is borrowed by every design that is not foam under PVC tape).
+    /// </summary>
+    public bool IsBorrowedFor(Polarizer p) => MaterialSet != "any" && MaterialSet != MaterialSetOf(p);
+
+    /// <summary>
+    /// The factor and what it was measured on, for reports: a borrowed calibration says so, since its
+    /// factor describes another material set's loading, not this design's.
+    /// </summary>
+    public string DescribeFor(Polarizer p) => IsBorrowedFor(p)
+        ? FormattableString.Invariant($"calibration factor {Factor:0.###}, measured on {MaterialSet} and borrowed for this design's {MaterialSetOf(p)} (no build of these materials has been measured)")
+        : FormattableString.Invariant($"calibration factor {Factor:0.###} for {MaterialSet}");
+
     /// <summary>The material set a design's surroundings belong to, as written in calibration files.</summary>
     public static string MaterialSetOf(Polarizer p)
     {

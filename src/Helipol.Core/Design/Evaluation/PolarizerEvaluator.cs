@@ -5,7 +5,8 @@ namespace Helipol.Design;
 
 /// <summary>
 /// Solves one polarizer geometry at a list of frequencies and samples its far field: the
-/// geometry is meshed once (for the highest frequency) and the engine's sweep reuses it.
+/// geometry is meshed once (for its design's mesh frequency, see <see cref="MeshDensity"/>, or the
+/// highest frequency asked when that is higher) and the engine's sweep reuses it.
 /// </summary>
 public static class PolarizerEvaluator
 {
@@ -16,17 +17,17 @@ public static class PolarizerEvaluator
     public static IReadOnlyList<CircularSamples> Sample(PolarizerBuild build, IReadOnlyList<double> frequenciesHz, ObservationSet directions,
         FieldSolveCounter? counter = null, int? maxParallelism = null)
     {
-        double maxF = frequenciesHz.Max();
-        var mesh = MeshedModel.Create(PolarizerWires.Build(build, maxF), maxF);
+        double meshF = MeshDensity.ForRun(build.MeshFrequencyHz, frequenciesHz);
+        var mesh = MeshedModel.Create(PolarizerWires.Build(build, meshF), meshF);
         return SampleMesh(mesh, frequenciesHz, directions, counter, maxParallelism);
     }
 
-    /// <summary>The bare whip (no polarizer) at the same frequencies and directions.</summary>
+    /// <summary>The bare whip (no polarizer) at the same frequencies and directions, meshed like the polarizer's build.</summary>
     public static IReadOnlyList<CircularSamples> SampleBareWhip(WhipKind kind, double lengthM, double radiusM, IReadOnlyList<double> frequenciesHz,
-        ObservationSet directions, FieldSolveCounter? counter = null, int? maxParallelism = null)
+        ObservationSet directions, FieldSolveCounter? counter = null, int? maxParallelism = null, double? meshFrequencyHz = null)
     {
-        double maxF = frequenciesHz.Max();
-        var mesh = MeshedModel.Create(PolarizerWires.BareWhip(kind, lengthM, radiusM), maxF);
+        double meshF = MeshDensity.ForRun(meshFrequencyHz, frequenciesHz);
+        var mesh = MeshedModel.Create(PolarizerWires.BareWhip(kind, lengthM, radiusM), meshF);
         return SampleMesh(mesh, frequenciesHz, directions, counter, maxParallelism);
     }
 

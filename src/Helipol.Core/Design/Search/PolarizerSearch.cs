@@ -5,10 +5,16 @@ using MathNet.Numerics.Optimization;
 
 namespace Helipol.Design;
 
-/// <summary>The winner of a search, before the full report is made.</summary>
+/// <summary>
+/// The winner of a search, before the full report is made. <paramref name="LimitsReached"/> names each
+/// searched quantity whose answer sits on an end of its search range: the true optimum may lie beyond.
+/// </summary>
 public sealed record SearchOutcome(
     int ElementCount, double OuterDiameterM, double ElementLengthM, double ElementRiseM, Winding Winding,
-    double ObjectiveDb, AxialRatioMap Map, int Evaluations, long FieldSolves, IReadOnlyList<string> Steps);
+    double ObjectiveDb, AxialRatioMap Map, int Evaluations, long FieldSolves, IReadOnlyList<string> Steps)
+{
+    public IReadOnlyList<string> LimitsReached { get; init; } = Array.Empty<string>();
+}
 
 /// <summary>
 /// Finds element length and rise (and element count and former diameter when they are auto)
@@ -58,15 +64,19 @@ public static class PolarizerSearch
                 foreach (var diameter in diameters)
                 {
                     var map = Map(scorer, count, diameter, coarseL, coarseH);
-                    steps.Add(FormattableString.Invariant($"outer loop: {count} elements on {diameter * 1e3:0.##} mm, best cell {map.BestValue:0.##} dB"));
+                    steps.Add(FormattableString.Invariant($"outer loop: {count} elements on {diameter * 1e3:0.##} mm, best cell objective {map.BestValue:0.##} dB"));
                     progress?.Report(steps[^1]);
                     if (map.BestValue < bestValue) { bestValue = map.BestValue; bestCount = count; bestDiameter = diameter; }
                 }
         }
 
+        bool pinned = counts.Length == 1 && diameters.Length == 1 && p.ElementLengthM is not null && p.ElementRiseM is not null;
         var fine = Map(scorer, bestCount, bestDiameter, lengths, rises);
-        steps.Add(FormattableString.Invariant($"map {lengths.Length} × {rises.Length} over length × rise for {bestCount} elements on {bestDiameter * 1e3:0.##} mm: best cell {fine.BestValue:0.##} dB"));
-        progress?.Report(steps[^1]);
+        if (!pinned)
+        {
+            steps.Add(FormattableString.Invariant($"map {lengths.Length} × {rises.Length} over length × rise for {bestCount} elements on {bestDiameter * 1e3:0.##} mm: best cell objective {fine.BestValue:0.##} dB"));
+            progress?.Report(steps[^1]);
+        }
         var ranked = fine.Ranked().Take(2).ToArray();
         if (ranked.Length == 0)
             throw new SearchException("no element length and rise in the search range can be built on this former (rise, spacing or bend radius out of limits)");
@@ -80,9 +90,39 @@ public static class PolarizerSearch
                 p.ElementLengthM is null, p.ElementRiseM is null, Step(lengths), Step(rises), polish);
         });
         var winner = starts.Select((x, k) => (x, k)).OrderBy(t => t.x.V).ThenBy(t => t.k).First().x;
-        steps.Add(FormattableString.Invariant($"local refinement from {ranked.Length} best cells (Nelder–Mead, then compass at {polish * 1e3:0.##} mm): {winner.V:0.###} dB at {winner.L * 1e3:0.###} mm × {winner.H * 1e3:0.###} mm, {Word(winner.W)} winding"));
+        steps.Add(pinned
+            ? FormattableString.Invariant($"no search: element count, length, rise and former diameter are all pinned; the geometry as written scores objective {winner.V:0.###} dB with the {Word(winner.W)} winding{(p.Winding == Winding.Auto ? " (the better of the two)" : "")}")
+            : FormattableString.Invariant($"local refinement from {ranked.Length} best cells (Nelder–Mead, then compass at {polish * 1e3:0.##} mm): objective {winner.V:0.###} dB at {winner.L * 1e3:0.###} mm × {winner.H * 1e3:0.###} mm, {Word(winner.W)} winding"));
         progress?.Report(steps[^1]);
-        return new SearchOutcome(bestCount, bestDiameter, winner.L, winner.H, winner.W, winner.V, fine, scorer.Evaluations, counter.Count, steps);
+        return new SearchOutcome(bestCount, bestDiameter, winner.L, winner.H, winner.W, winner.V, fine, scorer.Evaluations, counter.Count, steps)
+        {
+            LimitsReached = LimitsReached(counts, diameters, lengths, rises, bestCount, bestDiameter, winner.L, winner.H, polish,
+                p.ElementLengthM is null, p.ElementRiseM is null, scorer.Limits.MaximumRiseM),
+        };
+    }
+
+    /// <summary>
+    /// Each searched quantity whose answer lies on (or, after the local refinement, beyond) an end of
+    /// its range, in words. An optimum on a search limit is not known to be an optimum: the objective
+    /// may keep falling past it.
+    /// </summary>
+    public static IReadOnlyList<string> LimitsReached(int[] counts, double[] diameters, double[] lengths, double[] rises,
+        int count, double diameterM, double lengthM, double riseM, double polishM, bool lengthFree, bool riseFree, double fabricationMaxRiseM)
+    {
+        var found = new List<string>();
+        string Mm(double m) => FormattableString.Invariant($"{m * 1e3:0.##} mm");
+        if (counts.Length > 1 && (count == counts[0] || count == counts[^1]))
+            found.Add(FormattableString.Invariant($"element count {count} is the {(count == counts[0] ? "fewest" : "most")} searched (solve.search.elements)"));
+        if (diameters.Length > 1 && (diameterM == diameters[0] || diameterM == diameters[^1]))
+            found.Add($"former diameter {Mm(diameterM)} is the {(diameterM == diameters[0] ? "smallest" : "largest")} searched (solve.search.outer_diameter)");
+        double tol = polishM / 2;
+        if (lengthFree && lengths.Length > 1 && (lengthM <= lengths[0] + tol || lengthM >= lengths[^1] - tol))
+            found.Add($"element length {Mm(lengthM)} is at the {(lengthM <= lengths[0] + tol ? "short" : "long")} end of the search range {Mm(lengths[0])} to {Mm(lengths[^1])} (solve.search.element_length)");
+        if (riseFree && rises.Length > 1 && (riseM <= rises[0] + tol || riseM >= rises[^1] - tol))
+            found.Add(riseM >= rises[^1] - tol && rises[^1] >= fabricationMaxRiseM - 1e-9
+                ? $"element rise {Mm(riseM)} is the largest the former height allows (polarizer.former.height)"
+                : $"element rise {Mm(riseM)} is at the {(riseM <= rises[0] + tol ? "low" : "high")} end of the search range {Mm(rises[0])} to {Mm(rises[^1])} (solve.search.element_rise)");
+        return found;
     }
 
     private static string Word(Winding w) => w == Winding.Left ? "left" : "right";

@@ -23,6 +23,15 @@ public sealed record SweepResult(
     PatternCut ElevationCut,
     long FieldSolves)
 {
+    /// <summary>
+    /// False when the lowest worst-AR point is the first or last of the sweep: the curve is still
+    /// falling there, so the true minimum lies outside the swept range and <see cref="BestArDb"/> is only an edge value.
+    /// </summary>
+    public bool BestArInsideSweep => Points.Count < 2 || (BestArFrequencyHz != Points[0].Polarizer.FrequencyHz && BestArFrequencyHz != Points[^1].Polarizer.FrequencyHz);
+
+    /// <summary>True when the lowest point is the sweep's last (highest) frequency.</summary>
+    public bool BestArAtTopEdge => Points.Count >= 2 && BestArFrequencyHz == Points[^1].Polarizer.FrequencyHz;
+
     /// <summary>Width of the contiguous band around the best AR where the worst AR (wanted sense) is ≤ 3 dB, Hz; 0 when the best is above 3 dB.</summary>
     public double BandwidthHz => BandwidthHighHz - BandwidthLowHz;
 }
@@ -49,7 +58,7 @@ public static class BandSweep
         var cone = ObservationSet.Cone(elevation, design.Solve.AzimuthStepRad);
         var sense = design.Polarizer.Sense;
         var pol = PolarizerEvaluator.Evaluate(build, freqs, cone, sense, counter);
-        var bare = PolarizerEvaluator.SampleBareWhip(design.Whip.Kind, design.Whip.LengthM, design.Whip.RadiusM, freqs, cone, counter)
+        var bare = PolarizerEvaluator.SampleBareWhip(design.Whip.Kind, design.Whip.LengthM, design.Whip.RadiusM, freqs, cone, counter, meshFrequencyHz: build.MeshFrequencyHz)
             .Select(s => s.Summarize(sense)).ToArray();
         var sweep = pol.Select((p, i) => new SweepPoint(p, bare[i].Vswr50, bare[i].GainDbic(sense))).ToArray();
 

@@ -16,8 +16,10 @@ public sealed record ToleranceResult(
     double ArPerMmRiseDb,
     double BestArMHzPerMmLength,
     double BestArMHzPerMmRise,
-    double TrimMm,
+    double BestArFrequencyHz,
+    double LengthChangeToCentreMm,
     string TrimmingHint,
+    string TrimmingSummary,
     long FieldSolves);
 
 /// <summary>
@@ -26,16 +28,14 @@ public sealed record ToleranceResult(
 /// evaluate them. Each element gets its own length, rise and azimuth error (uniform within the
 /// design's ± spreads); each build one wrap-thickness error. A build passes when its worst axial
 /// ratio in the wanted sense is ≤ 3 dB at the band's low, centre and high frequency on the analysis
-/// cone, every 10° of azimuth: fewer points than the solve uses, to keep 500 builds near 5 s on two
-/// cores. A build whose wires would touch counts as failed.
+/// cone, every 10° of azimuth: fewer points than the solve uses, so 500 builds take about a second on
+/// two cores (figures from <c>make bench</c> in the README). A build whose wires would touch counts as failed.
+/// The trimming hint is <see cref="TrimmingHint"/> on the nominal build's best-AR frequency and its slope.
 /// </summary>
 public static class ToleranceAnalysis
 {
     public const double PassArDb = 3;
     public const double AzimuthStepRad = 10 * Math.PI / 180;
-
-    /// <summary>Length trimmed in the hint at 5.8 GHz, m (scaled with wavelength).</summary>
-    public const double TrimAt5800MHzM = 0.3e-3;
 
     public static ToleranceResult Run(PolarizerDesign design, PolarizerBuild nominal, int? builds = null, FieldSolveCounter? counter = null)
     {
@@ -79,13 +79,10 @@ public static class ToleranceAnalysis
         double arH = (Ar(Shift(0, step)) - Ar(Shift(0, -step))) / (2 * step * 1e3);
         double fL = (BestArFrequencyHz(design, Shift(step, 0), counter) - BestArFrequencyHz(design, Shift(-step, 0), counter)) / (2 * step * 1e3) / 1e6;
         double fH = (BestArFrequencyHz(design, Shift(0, step), counter) - BestArFrequencyHz(design, Shift(0, -step), counter)) / (2 * step * 1e3) / 1e6;
-        double trim = TrimAt5800MHzM * scale;
-        double move = -trim * 1e3 * fL;
-        string hint = double.IsFinite(move)
-            ? FormattableString.Invariant($"trimming {trim * 1e3:0.0#} mm off every element moves the best-AR frequency {(move >= 0 ? "up" : "down")} about {Math.Abs(move):0} MHz")
-            : "no trimming hint: the axial ratio has no minimum within ±8 % of the band centre, so trimming cannot be tied to a best-AR frequency";
+        double best = BestArFrequencyHz(design, nominal, counter);
+        var advice = TrimmingHint.For(design.Band.CenterHz, best, fL, PolarizerSearch.PolishStepAt5800MHzM * scale * 1e3, t.ElementLengthM * 1e3);
         return new ToleranceResult(count, t.Seed, yield, worst, Percentile(sorted, 0.1), Percentile(sorted, 0.5), Percentile(sorted, 0.9),
-            arL, arH, fL, fH, trim, hint, counter.Count - before);
+            arL, arH, fL, fH, best, advice.LengthChangeMm, advice.Text, advice.Summary, counter.Count - before);
     }
 
     /// <summary>

@@ -29,13 +29,17 @@ public static class PacketSummary
             new("Former outer diameter", F($"{l.OuterDiameterM * 1000:0.00} mm ({Source(solved.DiameterPinned)})")),
             new("Worst axial ratio", F($"{solved.WorstAxialRatioDb:0.0} dB over the band and elevation window")),
             new("Mean gain, wanted sense", F($"{solved.MeanGainDbic:0.0} dBic")),
-            new("Best axial ratio", F($"{sweep.BestArDb:0.0} dB at {sweep.BestArFrequencyHz / 1e6:0.#} MHz")),
+            new("Best axial ratio", sweep.BestArInsideSweep
+                ? F($"{sweep.BestArDb:0.0} dB at {sweep.BestArFrequencyHz / 1e6:0.#} MHz")
+                : F($"{(sweep.BestArAtTopEdge ? "above" : "below")} the sweep ({sweep.BestArDb:0.0} dB at its edge, {sweep.BestArFrequencyHz / 1e6:0.#} MHz)")),
             new("AR <= 3 dB bandwidth", sweep.BandwidthHz > 0
                 ? F($"{sweep.BandwidthHz / 1e6:0.#} MHz ({100 * sweep.BandwidthHz / sweep.BestArFrequencyHz:0.0} %)")
                 : "none: the axial ratio stays above 3 dB"),
             new("Tolerance yield", F($"{100 * tolerance.Yield:0.#} % of {tolerance.Builds} simulated builds reach AR <= 3 dB")),
-            new("Trimming", tolerance.TrimmingHint),
-            new("Coating calibration", F($"factor {solved.Calibration.Factor:0.###}")),
+            new("Trimming", tolerance.TrimmingSummary),
+            new("Coating calibration", solved.Calibration.IsBorrowedFor(design.Polarizer)
+                ? F($"factor {solved.Calibration.Factor:0.###}, borrowed from {solved.Calibration.MaterialSet}")
+                : F($"factor {solved.Calibration.Factor:0.###}, measured on {solved.Calibration.MaterialSet}")),
         ];
     }
 }

@@ -44,7 +44,14 @@ public static class ReportMarkdown
         foreach (var step in s.Search.Steps) L($"- {step}");
         L($"- {s.Search.Evaluations} geometries scored, {s.FieldSolves} field solves in all.");
         L($"");
-        L($"Dielectric around the elements (former contact, glue, wrap) enters as an effective coating (Richmond and Newman's coated-wire inductance, partial coverage by mixing, see Design/Wires/EffectiveCoating.cs) with calibration factor {s.Calibration.Factor:0.###} for {s.Calibration.MaterialSet}: {s.Calibration.Source}; {s.Calibration.FittedBy}.");
+        L($"The step figures are objective scores (axial ratio in dB less the weighted gain), not axial ratios; the band table below gives the axial ratio itself.");
+        if (s.Search.LimitsReached.Count > 0)
+        {
+            L($"");
+            L($"**At a search limit:** {string.Join("; ", s.Search.LimitsReached)}. The objective may keep improving beyond it: widen that range (or change the limit) in the design file and solve again.");
+        }
+        L($"");
+        L($"Dielectric around the elements (former contact, glue, wrap) enters as an effective coating (Richmond and Newman's coated-wire inductance, partial coverage by mixing, see Design/Wires/EffectiveCoating.cs) with {s.Calibration.DescribeFor(design.Polarizer)}: {s.Calibration.Source}; {s.Calibration.FittedBy}.");
         L($"");
         L($"## Band");
         L($"");
@@ -55,7 +62,7 @@ public static class ReportMarkdown
         L($"");
         L($"![axial ratio and gain](ar-gain.png)");
         L($"");
-        L($"On the analysis cone ({(sweep.ElevationRad == 0 ? "the horizon" : $"{sweep.ElevationRad * 180 / Math.PI:0.#}° above the ground")}, every 5° of azimuth) the best axial ratio is {sweep.BestArDb:0.0} dB at {sweep.BestArFrequencyHz / 1e6:0.#} MHz. {Bandwidth(sweep, centre)}");
+        L($"On the analysis cone ({(sweep.ElevationRad == 0 ? "the horizon" : $"{sweep.ElevationRad * 180 / Math.PI:0.#}° above the ground")}, every 5° of azimuth) {BestAr(sweep)} {Bandwidth(sweep, centre)}");
         L($"");
         var mid = sweep.Points.OrderBy(p => Math.Abs(p.Polarizer.FrequencyHz - centre)).First();
         L($"## Against the bare whip");
@@ -70,7 +77,10 @@ public static class ReportMarkdown
         L($"");
         L($"## Axial-ratio map");
         L($"");
-        L($"The coarse search map over element length × rise ({s.Search.Map.ElementCount} elements on {s.Search.Map.OuterDiameterM * 1e3:0.#} mm; blank cells cannot be built). The cross marks the solution.");
+        if (s.Search.Map.LengthsM.Length * s.Search.Map.RisesM.Length == 1)
+            L($"Element length and rise are both pinned, so there was no map to search: the plot holds the one geometry as written.");
+        else
+            L($"The coarse search map over element length × rise ({s.Search.Map.ElementCount} elements on {s.Search.Map.OuterDiameterM * 1e3:0.#} mm; blank cells cannot be built). The cross marks the solution.");
         L($"");
         L($"![axial-ratio map](ar-map.png)");
         L($"");
@@ -82,7 +92,7 @@ public static class ReportMarkdown
         L($"- worst AR percentiles: 10 % {tolerance.ArP10Db:0.0} dB, median {tolerance.ArP50Db:0.0} dB, 90 % {tolerance.ArP90Db:0.0} dB");
         L($"- sensitivity at the centre: {tolerance.ArPerMmLengthDb:+0.0;−0.0} dB of AR per mm of length, {tolerance.ArPerMmRiseDb:+0.0;−0.0} dB per mm of rise");
         if (double.IsFinite(tolerance.BestArMHzPerMmLength) && double.IsFinite(tolerance.BestArMHzPerMmRise))
-            L($"- best-AR frequency: {tolerance.BestArMHzPerMmLength:+0;−0} MHz per mm of length, {tolerance.BestArMHzPerMmRise:+0;−0} MHz per mm of rise");
+            L($"- best-AR frequency: {tolerance.BestArMHzPerMmLength:+0.0;−0.0} MHz per mm of length, {tolerance.BestArMHzPerMmRise:+0.0;−0.0} MHz per mm of rise");
         else
             L($"- best-AR frequency: no minimum within ±8 % of the centre, so its sensitivity is not defined");
         L($"- {tolerance.TrimmingHint}.");
@@ -103,6 +113,11 @@ public static class ReportMarkdown
     private static bool RuleAgrees(SolvedPolarizer s) => PracticeScaling.WindingFor(s.Sense) == s.Winding;
 
     private static string Worst(PracticeComparison p) => p.ObjectiveDb is null ? "not modelled" : string.Create(CultureInfo.InvariantCulture, $"{p.Points.Max(x => x.WorstScoreDb):0.0} dB");
+
+    /// <summary>The best AR of the sweep, or, when its lowest point is a sweep edge, that the minimum lies beyond it.</summary>
+    public static string BestAr(SweepResult sweep) => sweep.BestArInsideSweep
+        ? string.Create(CultureInfo.InvariantCulture, $"the best axial ratio is {sweep.BestArDb:0.0} dB at {sweep.BestArFrequencyHz / 1e6:0.#} MHz.")
+        : string.Create(CultureInfo.InvariantCulture, $"the axial ratio is still falling at the sweep's {(sweep.BestArAtTopEdge ? "top" : "bottom")} edge ({sweep.BestArDb:0.0} dB at {sweep.BestArFrequencyHz / 1e6:0.#} MHz), so its minimum lies {(sweep.BestArAtTopEdge ? "above" : "below")} the sweep.");
 
     private static string Bandwidth(SweepResult sweep, double centre) => sweep.BandwidthHz > 0
         ? string.Create(CultureInfo.InvariantCulture, $"AR stays ≤ 3 dB from {sweep.BandwidthLowHz / 1e6:0.#} to {sweep.BandwidthHighHz / 1e6:0.#} MHz: {sweep.BandwidthHz / 1e6:0.#} MHz, {sweep.BandwidthHz / centre * 100:0.##} % of the centre frequency.")

@@ -37,7 +37,8 @@ public static class ReportPlots
     {
         var plt = new Plot();
         var f = sweep.Points.Select(p => p.Polarizer.FrequencyHz / 1e6).ToArray();
-        var ar = plt.Add.Scatter(f, sweep.Points.Select(p => Math.Min(40, p.Polarizer.WorstScoreDb)).ToArray());
+        var arDb = sweep.Points.Select(p => Math.Min(ArCapDb, p.Polarizer.WorstScoreDb)).ToArray();
+        var ar = plt.Add.Scatter(f, arDb);
         ar.LegendText = $"worst AR, {Word(design.Polarizer.Sense)} (dB, left axis)";
         ar.MarkerSize = 0;
         ar.LineWidth = 2;
@@ -61,13 +62,14 @@ public static class ReportPlots
         var limit = plt.Add.HorizontalLine(3);
         limit.Color = Colors.Black.WithAlpha(0.4);
         limit.LinePattern = LinePattern.Dotted;
-        foreach (var edge in new[] { design.Band.LowHz, design.Band.HighHz })
-        {
-            var v = plt.Add.VerticalLine(edge / 1e6);
-            v.Color = Colors.Green.WithAlpha(0.6);
-            v.LinePattern = LinePattern.Dashed;
-        }
-        plt.Title($"{design.Name}: axial ratio and gain, {ElevationWord(sweep.ElevationRad)}");
+        BandEdges(plt, design);
+        // Both axes set by hand: autoscaling let the AR curve run off the top, and the legend needs
+        // free space above the curves.
+        plt.Axes.SetLimitsY(0, AxisTop(arDb.Max(), 0), plt.Axes.Left);
+        var gains = sweep.Points.SelectMany(p => new[] { p.Polarizer.GainRhcpDbic, p.Polarizer.GainLhcpDbic, p.BareWhipGainDbic }).Where(double.IsFinite).ToArray();
+        double gainLow = Math.Floor(gains.Min() / 5) * 5;
+        plt.Axes.SetLimitsY(gainLow, AxisTop(gains.Max(), gainLow), plt.Axes.Right);
+        plt.Title($"{design.Name}: axial ratio and gain, {ElevationWord(sweep.ElevationRad)}{(arDb.Max() >= ArCapDb ? FormattableString.Invariant($" (AR capped at {ArCapDb:0} dB)") : "")}");
         plt.XLabel("frequency (MHz)");
         plt.YLabel("axial ratio (dB)");
         plt.Axes.Right.Label.Text = "gain (dBic)";
@@ -89,7 +91,10 @@ public static class ReportPlots
         without.MarkerSize = 0;
         without.Color = Colors.Gray;
         without.LinePattern = LinePattern.Dashed;
-        plt.Title($"{design.Name}: VSWR against 50 Ω (capped at 20)");
+        BandEdges(plt, design);
+        double top = sweep.Points.Max(p => Math.Max(Math.Min(20, p.Polarizer.Vswr50), Math.Min(20, p.BareWhipVswr50)));
+        plt.Axes.SetLimitsY(1, AxisTop(double.IsFinite(top) ? top : 20, 1));
+        plt.Title($"{design.Name}: VSWR against 50 Ω (capped at 20), band edges dashed");
         plt.XLabel("frequency (MHz)");
         plt.YLabel("VSWR");
         plt.ShowLegend(Alignment.UpperRight);
@@ -154,6 +159,23 @@ public static class ReportPlots
         plt.XLabel("element length (mm)");
         plt.YLabel("element rise (mm)");
         return Png(plt, Width, Height, ImageFormat.Png);
+    }
+
+    /// <summary>Axial ratios above this are drawn at it, dB: past it the curve says nothing a builder can use.</summary>
+    public const double ArCapDb = 40;
+
+    /// <summary>Top of an axis whose data end at <paramref name="max"/> from <paramref name="low"/>: a third more, on a 5-unit step, for the legend.</summary>
+    public static double AxisTop(double max, double low) => Math.Ceiling((low + (max - low) * 1.35) / 5) * 5;
+
+    /// <summary>The band's low and high edges as dashed green lines.</summary>
+    private static void BandEdges(Plot plt, PolarizerDesign design)
+    {
+        foreach (var edge in new[] { design.Band.LowHz, design.Band.HighHz })
+        {
+            var v = plt.Add.VerticalLine(edge / 1e6);
+            v.Color = Colors.Green.WithAlpha(0.6);
+            v.LinePattern = LinePattern.Dashed;
+        }
     }
 
     private static string Word(Sense s) => s == Sense.Rhcp ? "RHCP" : "LHCP";

@@ -18,7 +18,7 @@ public static class SolvedJson
     public static string Write(PolarizerDesign design, SolvedPolarizer solved, SweepResult? sweep = null, ToleranceResult? tolerance = null)
     {
         var root = JsonNode.Parse(DesignJson.Write(design))!.AsObject();
-        root["solved"] = JsonNode.Parse(SolvedObject(solved, sweep, tolerance));
+        root["solved"] = JsonNode.Parse(SolvedObject(design, solved, sweep, tolerance));
         using var buffer = new MemoryStream();
         using (var json = new Utf8JsonWriter(buffer, Options)) root.WriteTo(json);
         return Encoding.UTF8.GetString(buffer.ToArray()) + "\n";
@@ -26,7 +26,7 @@ public static class SolvedJson
 
     private static readonly JsonWriterOptions Options = new() { Indented = true, NewLine = "\n", Encoder = JavaScriptEncoder.UnsafeRelaxedJsonEscaping };
 
-    private static string SolvedObject(SolvedPolarizer s, SweepResult? sweep, ToleranceResult? tolerance)
+    private static string SolvedObject(PolarizerDesign design, SolvedPolarizer s, SweepResult? sweep, ToleranceResult? tolerance)
     {
         using var buffer = new MemoryStream();
         using (var j = new Utf8JsonWriter(buffer, Options))
@@ -44,6 +44,8 @@ public static class SolvedJson
             j.WriteEndObject();
             j.WriteStartObject("calibration");
             j.WriteString("material_set", s.Calibration.MaterialSet);
+            j.WriteString("design_material_set", CoatingCalibration.MaterialSetOf(design.Polarizer));
+            j.WriteBoolean("borrowed", s.Calibration.IsBorrowedFor(design.Polarizer));
             Number(j, "loading_factor", s.Calibration.Factor);
             j.WriteString("fitted_by", s.Calibration.FittedBy);
             j.WriteString("source", s.Calibration.Source);
@@ -67,6 +69,9 @@ public static class SolvedJson
             j.WriteStartArray("steps");
             foreach (var step in s.Search.Steps) j.WriteStringValue(step);
             j.WriteEndArray();
+            j.WriteStartArray("limits_reached");
+            foreach (var limit in s.Search.LimitsReached) j.WriteStringValue(limit);
+            j.WriteEndArray();
             j.WriteEndObject();
 
             if (sweep is not null)
@@ -75,6 +80,7 @@ public static class SolvedJson
                 Number(j, "elevation_deg", sweep.ElevationRad * 180 / Math.PI);
                 Number(j, "best_axial_ratio_frequency_hz", sweep.BestArFrequencyHz);
                 Number(j, "best_axial_ratio_db", sweep.BestArDb);
+                j.WriteBoolean("best_axial_ratio_inside_sweep", sweep.BestArInsideSweep);
                 Number(j, "axial_ratio_3db_low_hz", sweep.BandwidthLowHz);
                 Number(j, "axial_ratio_3db_high_hz", sweep.BandwidthHighHz);
                 Number(j, "axial_ratio_3db_bandwidth_hz", sweep.BandwidthHz);
@@ -103,6 +109,8 @@ public static class SolvedJson
                 Number(j, "axial_ratio_db_per_mm_rise", tolerance.ArPerMmRiseDb);
                 Number(j, "best_ar_mhz_per_mm_length", tolerance.BestArMHzPerMmLength);
                 Number(j, "best_ar_mhz_per_mm_rise", tolerance.BestArMHzPerMmRise);
+                Number(j, "best_ar_frequency_hz", tolerance.BestArFrequencyHz);
+                Number(j, "length_change_to_centre_mm", tolerance.LengthChangeToCentreMm);
                 j.WriteString("trimming_hint", tolerance.TrimmingHint);
                 j.WriteNumber("field_solves", tolerance.FieldSolves);
                 j.WriteEndObject();
