@@ -166,8 +166,10 @@ public static class AnalyzeVerb
     private static void Table(CliConsole console, PolarizerDesign design, PolarizerBuild build, double elevationRad, IReadOnlyList<FrequencySummary> result)
     {
         var inv = CultureInfo.InvariantCulture;
-        var t = new Table().Title(Markup.Escape(string.Create(inv,
-                $"{design.Name}: {build.ElementCount} × {build.ElementLengthM * 1e3:0.##} mm elements, rise {build.ElementRiseM * 1e3:0.##} mm, {(build.Winding == Winding.Left ? "left" : "right")} winding, at {elevationRad * 180 / Math.PI:0.#}°")))
+        // The heading is a plain line (a terminal wraps it), not a table title that widens the table.
+        console.Out.WriteLine(string.Create(inv,
+                $"{design.Name}: {build.ElementCount} × {build.ElementLengthM * 1e3:0.##} mm elements, rise {build.ElementRiseM * 1e3:0.##} mm, {(build.Winding == Winding.Left ? "left" : "right")} winding; cone at {elevationRad * 180 / Math.PI:0.#}°"));
+        var t = new Table()
             // Units go in the caption and the cells stay bare numbers, so the table fits an
             // 80-column terminal without truncating a header.
             .Caption("impedance in Ω, VSWR against 50 Ω, AR in dB, gains in dBic")

@@ -1,5 +1,4 @@
 using System.Globalization;
-using Helipol.Geometry;
 using Helipol.Model;
 using Helipol.Spec;
 
@@ -57,12 +56,12 @@ public sealed record StarterSizes(
         // Six rings by default; thicker than a 38 mm board or thinner than 1 mm is not cut by hand.
         var rings = Math.Clamp(height / 6 > 38 * Mm ? (int)Math.Ceiling(height / (38 * Mm)) : height / 6 < 1 * Mm ? (int)Math.Floor(height / Mm) : 6, 1, 50);
         var thickness = Math.Clamp(height / rings, 1 * Mm, 200 * Mm);
-        // The ring templates nest one ring with its kerf, label margin and text band inside the
-        // board's margins (Geometry.RingTemplates); never smaller than the default 300 × 200 mm board.
-        static double Up10(double m) => Math.Ceiling(m / (10 * Mm) - 1e-9) * 10 * Mm;
-        var cell = outer + KerfM + 2 * RingTemplates.LabelMarginMm * Mm;
-        var boardWidth = Up10(cell + 2 * RingTemplates.BoardMarginMm * Mm);
-        var boardHeight = Up10(cell + RingTemplates.TextBandMm * Mm + 2 * RingTemplates.BoardMarginMm * Mm);
+        // One ring as the ring templates nest it (DesignChecks.BoardNeededMm), rounded up to 10 mm;
+        // never smaller than the default 300 × 200 mm board.
+        static double Up10(double mm) => Math.Ceiling(mm / 10 - 1e-9) * 10 * Mm;
+        var (needWidthMm, needHeightMm) = DesignChecks.BoardNeededMm(outer / Mm, KerfM / Mm);
+        var boardWidth = Up10(needWidthMm);
+        var boardHeight = Up10(needHeightMm);
         return new StarterSizes(whipLength, whip, cover, bore, outer, height, wire, centre, rings,
             Math.Max(300 * Mm, boardWidth), Math.Max(200 * Mm, boardHeight), thickness,
             // The 0.2 mm default, but never more than half the wire, or the groove no longer places it.
