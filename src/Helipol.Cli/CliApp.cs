@@ -1,5 +1,6 @@
 using System.CommandLine;
 using Helipol.Cli.Verbs;
+using Helipol.Spec;
 
 namespace Helipol.Cli;
 
@@ -61,6 +62,12 @@ public static class CliApp
         catch (DesignRefusedException ex)
         {
             error.WriteLine(ex.Message);
+            return ExitCodes.BadInput;
+        }
+        catch (DesignInputException ex)
+        {
+            // A design refused by the checker wherever it surfaces: its first problem, one line.
+            error.WriteLine(ex.Errors[0].ToString());
             return ExitCodes.BadInput;
         }
         catch (Helipol.Engine.ModelException ex)

@@ -18,7 +18,8 @@ public static partial class CliQuantity
         if (m.Success && double.TryParse(m.Groups[1].Value, NumberStyles.Float, CultureInfo.InvariantCulture, out var number)
             && kind.TryToSi(number, m.Groups[2].Value, out var si) && double.IsFinite(si))
             return si;
-        problem = $"{option}: found '{text}', allowed {kind.Noun()} with its unit, e.g. {kind.Example()}";
+        var hint = m.Success ? kind.UnitHint(m.Groups[2].Value) : "";
+        problem = $"{option}: found '{text}', allowed {kind.Noun()} with its unit, e.g. {kind.Example()}{hint}";
         return null;
     }
 }

@@ -166,14 +166,19 @@ public static class AnalyzeVerb
     private static void Table(CliConsole console, PolarizerDesign design, PolarizerBuild build, double elevationRad, IReadOnlyList<FrequencySummary> result)
     {
         var inv = CultureInfo.InvariantCulture;
-        var t = new Table().Title(Markup.Escape(string.Create(inv,
-                $"{design.Name}: {build.ElementCount} × {build.ElementLengthM * 1e3:0.##} mm elements, rise {build.ElementRiseM * 1e3:0.##} mm, {(build.Winding == Winding.Left ? "left" : "right")} winding; cone at {elevationRad * 180 / Math.PI:0.#}°")))
-            .AddColumn("frequency").AddColumn("impedance").AddColumn("VSWR 50 Ω").AddColumn("AR mean").AddColumn("AR worst").AddColumn("sense").AddColumn("RHCP").AddColumn("LHCP");
+        // The heading is a plain line (a terminal wraps it), not a table title that widens the table.
+        console.Out.WriteLine(string.Create(inv,
+                $"{design.Name}: {build.ElementCount} × {build.ElementLengthM * 1e3:0.##} mm elements, rise {build.ElementRiseM * 1e3:0.##} mm, {(build.Winding == Winding.Left ? "left" : "right")} winding; cone at {elevationRad * 180 / Math.PI:0.#}°"));
+        var t = new Table()
+            // Units go in the caption and the cells stay bare numbers, so the table fits an
+            // 80-column terminal without truncating a header.
+            .Caption("impedance in Ω, VSWR against 50 Ω, AR in dB, gains in dBic")
+            .AddColumn("MHz").AddColumn("impedance").AddColumn("VSWR").AddColumn("AR mean").AddColumn("AR worst").AddColumn("sense").AddColumn("RHCP").AddColumn("LHCP");
         foreach (var p in result)
-            t.AddRow(Markup.Escape(string.Create(inv, $"{p.FrequencyHz / 1e6:0.###} MHz")),
-                Markup.Escape(string.Create(inv, $"{p.ImpedanceOhm.Real:0.0} {(p.ImpedanceOhm.Imaginary < 0 ? "-" : "+")} j{Math.Abs(p.ImpedanceOhm.Imaginary):0.0} Ω")),
-                p.Vswr50.ToString("0.00", inv), p.MeanAxialRatioDb.ToString("0.0", inv) + " dB", p.WorstAxialRatioDb.ToString("0.0", inv) + " dB",
-                SolvedJson.SenseWord(p.Sense), p.GainRhcpDbic.ToString("0.00", inv) + " dBic", p.GainLhcpDbic.ToString("0.00", inv) + " dBic");
+            t.AddRow(Markup.Escape(string.Create(inv, $"{p.FrequencyHz / 1e6:0.###}")),
+                Markup.Escape(string.Create(inv, $"{p.ImpedanceOhm.Real:0.0}{(p.ImpedanceOhm.Imaginary < 0 ? "-" : "+")}j{Math.Abs(p.ImpedanceOhm.Imaginary):0.0}")),
+                p.Vswr50.ToString("0.00", inv), p.MeanAxialRatioDb.ToString("0.0", inv), p.WorstAxialRatioDb.ToString("0.0", inv),
+                SolvedJson.SenseWord(p.Sense), p.GainRhcpDbic.ToString("0.00", inv), p.GainLhcpDbic.ToString("0.00", inv));
         console.Tables.Write(t);
     }
 }

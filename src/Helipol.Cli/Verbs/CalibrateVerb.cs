@@ -7,10 +7,10 @@ using Helipol.Spec;
 namespace Helipol.Cli.Verbs;
 
 /// <summary>
-/// <c>helipol calibrate FILE --best-at 5.65GHz [-o cal/x.yaml]</c>: the design file describes a
+/// <c>helipol calibrate FILE --best-at 5.65GHz [-o cal/x.yaml] [--force]</c>: the design file describes a
 /// build as made (length, rise, count and diameter pinned); the measured frequency of its best
 /// axial ratio fixes the coating factor of its material set. Writes a calibration file that
-/// designs reference with <c>calibration: cal/x.yaml</c>.
+/// designs reference with <c>calibration: cal/x.yaml</c>; an existing file is replaced only with --force.
 /// </summary>
 public static class CalibrateVerb
 {
@@ -19,7 +19,8 @@ public static class CalibrateVerb
         var file = new Argument<string>("FILE") { Description = "design file of the measured build (.yaml), geometry pinned" };
         var bestAt = new Option<string>("--best-at") { Description = "frequency where the build measured its best axial ratio, e.g. 5.65GHz", Required = true };
         var output = new Option<string>("--output", "-o") { Description = "calibration file to write (default cal/<material set>.yaml next to the design)" };
-        var command = new Command("calibrate", "Fit the dielectric-loading factor of a material set to a measured build's best-AR frequency.") { file, bestAt, output };
+        var force = new Option<bool>("--force") { Description = "replace an existing calibration file" };
+        var command = new Command("calibrate", "Fit the dielectric-loading factor of a material set to a measured build's best-AR frequency.") { file, bestAt, output, force };
         command.SetAction(parse =>
         {
             var designs = DesignLoader.LoadAll(new[] { parse.GetValue(file)! }, console);
@@ -40,6 +41,13 @@ public static class CalibrateVerb
                 console.Error.WriteLine(SolveRunner.PinnedError(design, ex.KeyPath));
                 return ExitCodes.BadInput;
             }
+            var folder = Path.GetDirectoryName(Path.GetFullPath(design.SourceFile)) ?? ".";
+            // A calibration file holds a measurement; replacing one silently could lose it.
+            if (parse.GetValue(output) is { } asked && File.Exists(asked) && !parse.GetValue(force))
+            {
+                console.Error.WriteLine($"helipol calibrate: {asked}: found an existing file, allowed a new file (or --force to replace it)");
+                return ExitCodes.BadInput;
+            }
             CoatingCalibration fit;
             var counter = new FieldSolveCounter();
             try
@@ -51,8 +59,12 @@ public static class CalibrateVerb
                 console.Error.WriteLine(ex.Message);
                 return ExitCodes.BadInput;
             }
-            var folder = Path.GetDirectoryName(Path.GetFullPath(design.SourceFile)) ?? ".";
             var target = parse.GetValue(output) ?? Path.Combine(folder, "cal", fit.MaterialSet.Replace(" + ", "-") + ".yaml");
+            if (File.Exists(target) && !parse.GetValue(force))
+            {
+                console.Error.WriteLine($"helipol calibrate: {target}: found an existing file, allowed a new file (or --force to replace it)");
+                return ExitCodes.BadInput;
+            }
             AtomicFile.WriteAllText(target, CalibrationFile.Write(fit));
             console.Out.WriteLine(string.Create(CultureInfo.InvariantCulture,
                 $"loading factor {fit.Factor:0.####} for {fit.MaterialSet} ({counter.Count} field solves); wrote {target}"));

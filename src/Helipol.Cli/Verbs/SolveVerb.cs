@@ -65,21 +65,22 @@ public static class SolveVerb
         console.Write(design);
 
         var practice = s.Practice.Layout;
-        var elements = new Table().Title(Markup.Escape($"elements: solved by the field model, with {PracticeScaling.Label} beside"))
-            .AddColumn("quantity").AddColumn("solved").AddColumn("practice scaling").AddColumn("from");
+        // Row names stay short so the whole column label "practice scaling, not solved" fits 80 columns.
+        var elements = new Table().Title("elements, solved by the field model")
+            .AddColumn("quantity").AddColumn("solved").AddColumn(Markup.Escape(PracticeScaling.Label)).AddColumn("from");
         string From(bool pinned) => pinned ? "design file" : "search";
         string W(Winding w) => w == Winding.Left ? "left" : "right";
         elements.AddRow("elements", s.Layout.Count.ToString(CultureInfo.InvariantCulture), practice.Count.ToString(CultureInfo.InvariantCulture), From(s.CountPinned));
         elements.AddRow("element length", Mm(s.Layout.LengthM), Mm(practice.LengthM), From(s.LengthPinned));
         elements.AddRow("element rise", Mm(s.Layout.RiseM), Mm(practice.RiseM), From(s.RisePinned));
-        elements.AddRow("former outer diameter", Mm(s.Layout.OuterDiameterM), Mm(practice.OuterDiameterM), From(s.DiameterPinned));
+        elements.AddRow("former diameter", Mm(s.Layout.OuterDiameterM), Mm(practice.OuterDiameterM), From(s.DiameterPinned));
         elements.AddRow("element axis radius", Mm(s.Layout.AxisRadiusM), Mm(practice.AxisRadiusM), "derived");
         elements.AddRow("arc angle", Deg(s.Layout.ArcAngleRad), Deg(practice.ArcAngleRad), "derived");
         elements.AddRow("pitch angle", Deg(s.Layout.PitchAngleRad), Deg(practice.PitchAngleRad), "derived");
         elements.AddRow("winding", W(s.Winding), W(s.Practice.Winding) + " (builders' rule)", s.WindingPinned ? "design file" : "field model");
         elements.AddRow(Markup.Escape($"worst AR, {(s.Sense == Sense.Lhcp ? "LHCP" : "RHCP")}"), Db(s.WorstAxialRatioDb),
             s.Practice.ObjectiveDb is null ? "not modelled" : Db(s.Practice.Points.Max(p => p.WorstScoreDb)), "field model");
-        elements.AddRow("mean gain, wanted sense", Db(s.MeanGainDbic) + "ic", "", "field model");
+        elements.AddRow("gain, wanted sense", Db(s.MeanGainDbic) + "ic", "", "field model");
         console.Write(elements);
         console.WriteLine(string.Create(CultureInfo.InvariantCulture,
             $"Calibration factor {s.Calibration.Factor:0.###}: {s.Calibration.Source}{(s.Calibration.IsBorrowedFor(d.Polarizer) ? $"; measured on {s.Calibration.MaterialSet}, borrowed for {CoatingCalibration.MaterialSetOf(d.Polarizer)}" : "")}."));

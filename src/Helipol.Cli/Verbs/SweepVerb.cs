@@ -2,6 +2,7 @@ using System.CommandLine;
 using System.Globalization;
 using Helipol.Design;
 using Helipol.Emit.Report;
+using Helipol.Spec;
 using Spectre.Console;
 
 namespace Helipol.Cli.Verbs;
@@ -23,9 +24,9 @@ public static class SweepVerb
             var designs = DesignLoader.LoadAll(new[] { parse.GetValue(file)! }, console);
             if (designs is null) return ExitCodes.BadInput;
             var design = designs[0];
-            if (parse.GetValue(points) is { } n && (n < 3 || n > 2001))
+            if (parse.GetValue(points) is { } n && (n < DesignKeys.MinSweepPoints || n > DesignKeys.MaxSweepPoints))
             {
-                console.Error.WriteLine(string.Create(CultureInfo.InvariantCulture, $"helipol sweep: --points: found {n}, allowed 3 to 2001"));
+                console.Error.WriteLine(string.Create(CultureInfo.InvariantCulture, $"helipol sweep: --points: found {n}, allowed {DesignKeys.MinSweepPoints} to {DesignKeys.MaxSweepPoints} (as solve.sweep.points)"));
                 return ExitCodes.BadInput;
             }
             var counter = new FieldSolveCounter();

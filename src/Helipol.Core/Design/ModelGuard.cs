@@ -27,8 +27,8 @@ public static class ModelGuard
         if (p.ElementCount is null || p.ElementLengthM is null || p.ElementRiseM is null || p.Former.OuterDiameterM is null)
             return null; // the search skips unbuildable candidates and says so if none remain
         var layout = PinnedLayout.Require(design);
-        if (limits.Violation(layout) is { } violation)
-            return ("polarizer.element_length", $"pinned elements that cannot be built ({violation})", "a layout within the fabrication limits");
+        if (limits.Check(layout) is { } violation)
+            return (ViolationKey(design, violation), $"pinned elements that cannot be built ({violation})", "a layout within the fabrication limits");
 
         var build = PolarizerBuild.From(design, layout.Count, layout.LengthM, layout.RiseM, layout.OuterDiameterM, Winding.Right, calibrationFactor);
         double maxF = HighestFrequencyHz(design);
@@ -38,11 +38,39 @@ public static class ModelGuard
         }
         catch (ModelException ex)
         {
-            return ("polarizer.element_length", $"a geometry the thin-wire model refuses ({ex.Message})",
+            return (MeshKey(design, ex.WireIndices), $"a geometry the thin-wire model refuses ({ex.Message})",
                 "wires that keep clear of each other with segments of at least four radii");
         }
         return null;
     }
+
+    /// <summary>
+    /// The key a user would change for a mesh fault: wires[0] is the whip (PolarizerWires), so a
+    /// fault on it alone is its diameter; a fault on one element alone is the element wire's
+    /// diameter, or its height on a monopole when it dips to the ground; elements touching each
+    /// other are a matter of their length.
+    /// </summary>
+    private static string MeshKey(PolarizerDesign design, IReadOnlyList<int> wires)
+    {
+        var p = design.Polarizer;
+        if (wires.Count == 1 && wires[0] == 0) return "whip.diameter";
+        if (wires.Contains(0)) return "polarizer.former.bore";
+        if (wires.Count == 1)
+        {
+            var nearGround = design.Whip.Kind == WhipKind.Monopole && p.CentreHeightM - (p.ElementRiseM ?? 0) / 2 < 2 * p.Wire.RadiusM;
+            return nearGround ? "polarizer.centre_height" : "polarizer.wire.diameter";
+        }
+        return "polarizer.element_length";
+    }
+
+    /// <summary>The key a user would change for a layout outside the fabrication limits.</summary>
+    private static string ViolationKey(PolarizerDesign design, FabricationViolation violation) => violation.Cause switch
+    {
+        FabricationCause.Rise => "polarizer.element_rise",
+        FabricationCause.Wire => "polarizer.wire.diameter",
+        FabricationCause.Ground => "polarizer.centre_height",
+        _ => "polarizer.element_length",
+    };
 
     /// <summary>The highest frequency any verb solves: the top of the reported sweep.</summary>
     public static double HighestFrequencyHz(PolarizerDesign design) =>

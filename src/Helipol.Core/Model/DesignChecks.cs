@@ -8,6 +8,20 @@ namespace Helipol.Model;
 /// </summary>
 public static class DesignChecks
 {
+    /// <summary>Margin round a ring's contour for its element numbers, mm (the ring templates' layout).</summary>
+    public const double RingLabelMarginMm = 5.0;
+    /// <summary>Band under each ring for its number and the design name, mm.</summary>
+    public const double RingTextBandMm = 8.0;
+    /// <summary>Margin inside the board's edge, mm.</summary>
+    public const double BoardEdgeMarginMm = 5.0;
+
+    /// <summary>Smallest board (width, height) in mm that holds one ring of this outer diameter.</summary>
+    public static (double WidthMm, double HeightMm) BoardNeededMm(double outerDiameterMm, double kerfMm)
+    {
+        var cell = outerDiameterMm + kerfMm + 2 * RingLabelMarginMm;
+        return (cell + 2 * BoardEdgeMarginMm, cell + RingTextBandMm + 2 * BoardEdgeMarginMm);
+    }
+
     public static void Check(SpecDocument doc, PolarizerDesign design, SpecErrors errors)
     {
         var p = design.Polarizer;
@@ -62,12 +76,15 @@ public static class DesignChecks
                     $"elements that keep clear of each other: {layout.Count} elements of this length and rise come within {L(gap)} of each other, less than the wire diameter ({L(p.Wire.DiameterM)})");
         }
 
-        // A former must fit on the board it is cut from.
-        var ringMm = p.OuterDiameterOrPracticeM(design.Band.CenterHz) * 1e3 + 2 * design.Fabrication.KerfMm;
-        var boardMm = Math.Min(design.Fabrication.BoardWidthMm, design.Fabrication.BoardHeightMm);
-        if (ringMm > boardMm)
+        // A former must fit on the board it is cut from, as the ring templates nest it: the ring
+        // with half a kerf and a label margin round it, a text band under it, inside the board's
+        // margins (Geometry/RingTemplates.cs; a test keeps the two equal). An auto former may be
+        // searched up to the top of its range.
+        var outerMm = (former.OuterDiameterM ?? design.Solve.Search.OuterDiameterMaxM) * 1e3;
+        var (needWidthMm, needHeightMm) = BoardNeededMm(outerMm, design.Fabrication.KerfMm);
+        if (design.Fabrication.BoardWidthMm < needWidthMm || design.Fabrication.BoardHeightMm < needHeightMm)
             errors.Add(doc.MarkOf("fabrication.board"), "fabrication.board",
                 $"a board {doc.WrittenOf("fabrication.board.width")} by {doc.WrittenOf("fabrication.board.height")}",
-                $"a board at least {ringMm.ToString("0.##", System.Globalization.CultureInfo.InvariantCulture)} mm each way for one ring");
+                $"a board at least {needWidthMm.ToString("0.##", System.Globalization.CultureInfo.InvariantCulture)} mm wide by {needHeightMm.ToString("0.##", System.Globalization.CultureInfo.InvariantCulture)} mm high for one ring with its labels");
     }
 }

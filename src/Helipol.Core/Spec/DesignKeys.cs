@@ -21,6 +21,10 @@ public static class DesignKeys
     public const double LowestFrequencyHz = 100e6;
     public const double HighestFrequencyHz = 20e9;
 
+    /// <summary>Frequencies in a reported sweep: solve.sweep.points and `sweep --points` share these limits.</summary>
+    public const int MinSweepPoints = 3;
+    public const int MaxSweepPoints = 1001;
+
     private static QuantityField Frequency() => new(QuantityKind.Frequency, LowestFrequencyHz, HighestFrequencyHz, minInclusive: true);
 
     public static readonly string[] WireMaterials = { "pec", "copper", "brass", "steel", "stainless" };
@@ -102,7 +106,7 @@ public static class DesignKeys
         F("grid", new IntegerField(3, 41), "points per axis of the coarse map before local refinement") with { Default = "9" });
 
     private static readonly MappingField Sweep = new(false,
-        F("points", new IntegerField(3, 1001), "frequencies in the sweep") with { Default = "101" },
+        F("points", new IntegerField(MinSweepPoints, MaxSweepPoints), "frequencies in the sweep") with { Default = "101" },
         F("span", new QuantityField(QuantityKind.Percent, 0, 0.5), "sweep from band low − span to high + span, as a share of center") with { Default = "10 %" });
 
     private static readonly MappingField Solve = new(false,

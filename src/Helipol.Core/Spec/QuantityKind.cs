@@ -52,6 +52,17 @@ public static class QuantityKinds
         _ => throw new ArgumentOutOfRangeException(nameof(kind)),
     };
 
+    /// <summary>
+    /// The accepted unit that differs from <paramref name="unit"/> only in letter case ("mhz" → "MHz"),
+    /// or null. Case is never guessed silently: m is milli and M is mega (SI Brochure, 9th ed., §3).
+    /// </summary>
+    public static string? UnitWithOtherCase(this QuantityKind kind, string unit) =>
+        kind.UnitsWritten().FirstOrDefault(u => u != unit && string.Equals(u, unit, StringComparison.OrdinalIgnoreCase));
+
+    /// <summary>" (did you mean 'MHz'?)" for a unit written in the wrong case, else "".</summary>
+    public static string UnitHint(this QuantityKind kind, string unit) =>
+        kind.UnitWithOtherCase(unit) is { } fixedUnit ? $" (did you mean '{fixedUnit}'?)" : "";
+
     /// <summary>Converts a number in a written unit to SI; false if the unit is not one this kind accepts.</summary>
     public static bool TryToSi(this QuantityKind kind, double number, string unit, out double si)
     {

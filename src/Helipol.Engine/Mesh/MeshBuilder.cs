@@ -144,9 +144,9 @@ internal static class MeshBuilder
             n = Math.Max(n, 1);
             if (len / n < shortest) n = (int)Math.Floor(len / shortest);
             if (n < 1)
-                throw new ModelException(F($"wires[{w}].points[{i}]: found an edge {len * 1e3:0.###} mm long, allowed at least {o.MinimumLengthInRadii} wire radii ({shortest * 1e3:0.###} mm) for the thin-wire model"));
+                throw new ModelException(F($"wires[{w}].points[{i}]: found an edge {len * 1e3:0.###} mm long, allowed at least {o.MinimumLengthInRadii} wire radii ({shortest * 1e3:0.###} mm) for the thin-wire model"), w);
             if (len / n > wavelength / 10 * 1.000001 && n * 1.0 < len / target)
-                throw new ModelException(F($"wires[{w}]: found radius {wire.RadiusM * 1e3:0.###} mm, too thick for the thin-wire model at this frequency (segments would be {len / n / wavelength:0.###} λ long, allowed ≤ 0.1 λ with length ≥ {o.MinimumLengthInRadii} radii)"));
+                throw new ModelException(F($"wires[{w}]: found radius {wire.RadiusM * 1e3:0.###} mm, too thick for the thin-wire model at this frequency (segments would be {len / n / wavelength:0.###} λ long, allowed ≤ 0.1 λ with length ≥ {o.MinimumLengthInRadii} radii)"), w);
             int prev = NodeIndex(a, nodes, tol);
             for (int k = 1; k <= n; k++)
             {
@@ -181,7 +181,7 @@ internal static class MeshBuilder
                 bool touches = sp.Start.Z == 0 || sp.End.Z == 0;
                 double lowest = touches ? Math.Max(sp.Start.Z, sp.End.Z) : Math.Min(sp.Start.Z, sp.End.Z);
                 if (lowest < sp.RadiusM)
-                    throw new ModelException(F($"wires[{sp.WireIndex}]: found a segment {lowest * 1e3:0.###} mm above the ground plane near {sp.Centre}, allowed at least one wire radius ({sp.RadiusM * 1e3:0.###} mm) except a wire end standing on the ground"));
+                    throw new ModelException(F($"wires[{sp.WireIndex}]: found a segment {lowest * 1e3:0.###} mm above the ground plane near {sp.Centre}, allowed at least one wire radius ({sp.RadiusM * 1e3:0.###} mm) except a wire end standing on the ground"), sp.WireIndex);
             }
             for (int q = p + 1; q < segs.Length; q++)
             {
@@ -191,7 +191,7 @@ internal static class MeshBuilder
                 if (Geometry3.DistanceLowerBound(sp, sq) >= sp.RadiusM + sq.RadiusM) continue;
                 double d = Geometry3.SegmentDistance(sp.Start, sp.End, sq.Start, sq.End);
                 if (d < sp.RadiusM + sq.RadiusM)
-                    throw new ModelException(F($"wires[{sp.WireIndex}] and wires[{sq.WireIndex}]: found surfaces touching or crossing near {sp.Centre} (axes {d * 1e3:0.###} mm apart), allowed at least the sum of radii ({(sp.RadiusM + sq.RadiusM) * 1e3:0.###} mm) unless joined at a shared point"));
+                    throw new ModelException(F($"wires[{sp.WireIndex}] and wires[{sq.WireIndex}]: found surfaces touching or crossing near {sp.Centre} (axes {d * 1e3:0.###} mm apart), allowed at least the sum of radii ({(sp.RadiusM + sq.RadiusM) * 1e3:0.###} mm) unless joined at a shared point"), sp.WireIndex, sq.WireIndex);
             }
         }
     }

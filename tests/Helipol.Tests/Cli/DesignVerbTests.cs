@@ -108,6 +108,56 @@ public class DesignVerbTests
         Assert.False(File.Exists(output + ".x"));
     }
 
+    // A misspelt key must not leave the factor silently at its default (the file's keys are the
+    // ones CalibrationFile.Write writes).
+    [Fact]
+    public void CalibrationFileRefusesAnUnknownKey()
+    {
+        var folder = TestPaths.NewTempFolder();
+        var bad = Path.Combine(folder, "bad.yaml");
+        File.WriteAllText(bad, "material_set: foam\nloading_factor: 2\nloading_facter: 3\n");
+        var ex = Assert.Throws<CalibrationException>(() => CalibrationFile.Read(bad, "bad.yaml"));
+        Assert.Equal("bad.yaml:3:1: calibration: found key 'loading_facter', allowed material_set, loading_factor, fitted_by, design, source", ex.Message);
+        Directory.Delete(folder, recursive: true);
+    }
+
+    // A calibration file records a measurement: calibrate replaces one only when told to.
+    [Fact]
+    public void CalibrateKeepsAnExistingFileUnlessForced()
+    {
+        var path = PinnedCopy("left");
+        var output = Path.Combine(Path.GetDirectoryName(path)!, "kept.yaml");
+        File.WriteAllText(output, "loading_factor: 7\n");
+        var run = CliRun.Of("calibrate", path, "--best-at", "5.8GHz", "-o", output);
+        Assert.Equal(2, run.ExitCode);
+        Assert.Equal($"helipol calibrate: {output}: found an existing file, allowed a new file (or --force to replace it)", run.FirstErrorLine);
+        Assert.Equal("loading_factor: 7\n", File.ReadAllText(output));
+    }
+
+    // An 80-column terminal is the classic default (ECMA-48 and the VT100 lines are 80 wide): the
+    // analyze table must fit it without cutting a header short.
+    [Fact]
+    public void AnalyzeTableFitsEightyColumnsWithWholeHeaders()
+    {
+        var run = CliRun.Of("analyze", PinnedCopy("left"), "--from", "5.7GHz", "--to", "5.9GHz", "--points", "2");
+        Assert.Equal(0, run.ExitCode);
+        // Colour codes (ECMA-48 SGR) take no columns on a terminal.
+        var plain = System.Text.RegularExpressions.Regex.Replace(run.Out, "\u001b\\[[0-9;]*m", "");
+        var table = plain.Split('\n').Skip(1).TakeWhile(l => !l.StartsWith("polarizer.", StringComparison.Ordinal)).ToList();
+        Assert.All(table, l => Assert.True(l.Length <= 80, l));
+        Assert.DoesNotContain("…", run.Out);
+        Assert.Contains("AR worst", run.Out);
+    }
+
+    // solve.sweep.points accepts 3 to 1001 (DesignKeys); the command-line override takes the same.
+    [Fact]
+    public void SweepPointsHaveTheDesignFileLimits()
+    {
+        var run = CliRun.Of("sweep", PinnedCopy("left"), "--points", "1500");
+        Assert.Equal(2, run.ExitCode);
+        Assert.Equal("helipol sweep: --points: found 1500, allowed 3 to 1001 (as solve.sweep.points)", run.FirstErrorLine);
+    }
+
     [Fact]
     public void CalibrationFileErrorsNameTheLineAndKey()
     {

@@ -44,6 +44,42 @@ public class RefusalTests
         finally { Directory.Delete(output, recursive: true); }
     }
 
+    // A refusal points at the key a builder would change. The whip's radius against the segment
+    // length the frequency needs is the whip's (Harrington, Field Computation by Moment Methods,
+    // ch. 4: segments ≫ radius and ≤ λ/10); a wire whose end margins (3 diameters) cannot fit even
+    // the practice rise-to-height share (12.7 of 15.9 mm, common practice, no source) is the wire's.
+    [Theory]
+    [InlineData("19 GHz", "3000 mm", "0.3 mm", "4.9 mm", "3.9 mm", "12 mm", "5.8 mm", "whip.diameter", "wires[0]")]
+    [InlineData("5.8 GHz", "24.3 mm", "4.9 mm", "16 mm", "12.7 mm", "40 mm", "19 mm", "polarizer.wire.diameter", "rise does not fit")]
+    [InlineData("5.8 GHz", "24.3 mm", "0.8 mm", "24 mm", "18.5 mm", "28 mm", "19 mm", "polarizer.element_rise", "rise does not fit")]
+    public void RefusalPointsAtTheKeyToChange(string center, string whipLength, string wire, string length, string rise, string outer, string height, string key, string cause)
+    {
+        var folder = TestPaths.NewTempFolder();
+        try
+        {
+            var path = Path.Combine(folder, "probe.yaml");
+            File.WriteAllText(path, $"""
+                name: probe
+                band: {"{"} center: {center} {"}"}
+                whip: {"{"} kind: dipole, length: {whipLength}, diameter: 1 mm {"}"}
+                polarizer:
+                  sense: rhcp
+                  elements: 3
+                  element_length: {length}
+                  element_rise: {rise}
+                  wire: {"{"} diameter: {wire}, material: steel {"}"}
+                  former: {"{"} material: eps-foam, outer_diameter: {outer}, bore: 8.4 mm, height: {height} {"}"}
+
+                """);
+            var run = CliRun.Of("check", path);
+            Assert.Equal(2, run.ExitCode);
+            Assert.StartsWith($"{path}:", run.FirstErrorLine);
+            Assert.Contains($": {key}: found ", run.FirstErrorLine);
+            Assert.Contains(cause, run.FirstErrorLine);
+        }
+        finally { Directory.Delete(folder, recursive: true); }
+    }
+
     [Fact]
     public void SearchThatFindsNothingBuildableIsBadInputInEveryVerb()
     {

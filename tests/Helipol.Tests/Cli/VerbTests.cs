@@ -64,7 +64,69 @@ public class VerbTests
             var path = Path.Combine(folder, "starter.yaml");
             Assert.Equal(0, CliRun.Of("check", path).ExitCode);
             Assert.StartsWith("# yaml-language-server: $schema=./helipol.schema.json", File.ReadAllText(path));
-            Assert.Equal(1, CliRun.Of("new", "starter", "--center", center, "-o", folder).ExitCode); // never overwrites
+            // The schema the first line names is beside the design, and is the current one.
+            Assert.Equal(Helipol.Spec.DesignSchema.Generate(), File.ReadAllText(Path.Combine(folder, "helipol.schema.json")));
+            var again = CliRun.Of("new", "starter", "--center", center, "-o", folder);
+            Assert.Equal(2, again.ExitCode); // never overwrites: an existing name is bad input
+            Assert.Contains("starter.yaml: found an existing file", again.FirstErrorLine);
+        }
+        finally { Directory.Delete(folder, recursive: true); }
+    }
+
+    // The whole band the design file accepts (100 MHz to 20 GHz), both whips: every starter passes
+    // `check` with no warning, except the printed-sleeve groove note from about 17 GHz, where the
+    // thin-wire limit (wire radius under 1 % of λ, DesignWarnings) leaves a wire under 0.33 mm
+    // whose 0.6-diameter groove is shallower than one 0.2 mm print layer.
+    [Theory]
+    [InlineData("dipole")]
+    [InlineData("monopole")]
+    public void NewWritesACheckedDesignForEveryBand(string whip)
+    {
+        var folder = TestPaths.NewTempFolder();
+        try
+        {
+            foreach (var center in new[] { "100MHz", "144MHz", "433MHz", "868MHz", "1.575GHz", "2.45GHz", "5.8GHz", "10GHz", "14GHz", "17GHz", "20GHz" })
+            {
+                var name = "s" + center.Replace(".", "_");
+                var run = CliRun.Of("new", name, "--center", center, "--whip", whip, "-o", folder);
+                Assert.True(run.ExitCode == 0, $"{center} {whip}: {run.FirstErrorLine}");
+                var check = CliRun.Of("check", Path.Combine(folder, name + ".yaml"));
+                Assert.True(check.ExitCode == 0, $"{center} {whip}: {check.FirstErrorLine}");
+                var warnings = check.Out.Split('\n').Where(l => l.Contains(": warning: ")).ToList();
+                var allowed = center is "17GHz" or "20GHz" ? warnings.Where(w => !w.Contains("printed sleeve's grooves would be")) : warnings;
+                Assert.True(!allowed.Any(), $"{center} {whip}: {string.Join(" | ", warnings)}");
+            }
+        }
+        finally { Directory.Delete(folder, recursive: true); }
+    }
+
+    // Comments start in one column, so the file reads as a table.
+    [Fact]
+    public void NewAlignsItsComments()
+    {
+        var text = Helipol.Cli.Verbs.StarterDesign.Text("aligned", 2.45e9, monopole: false);
+        var columns = text.Split('\n').Where(l => !l.StartsWith('#') && l.Contains(" # ")).Select(l => l.IndexOf(" # ", StringComparison.Ordinal)).Distinct().ToList();
+        Assert.Single(columns);
+    }
+
+    // A starter must build, not only check: the ends of the band and a low UHF band, with a
+    // small search so the test stays cheap.
+    [Theory]
+    [InlineData("100MHz", "dipole")]
+    [InlineData("433MHz", "monopole")]
+    [InlineData("20GHz", "dipole")]
+    [InlineData("20GHz", "monopole")]
+    public void NewWritesADesignThatBuilds(string center, string whip)
+    {
+        var folder = TestPaths.NewTempFolder();
+        try
+        {
+            Assert.Equal(0, CliRun.Of("new", "starter", "--center", center, "--whip", whip, "-o", folder).ExitCode);
+            var path = Path.Combine(folder, "starter.yaml");
+            File.AppendAllText(path, "solve:\n  frequencies: 1\n  search: { grid: 3 }\n  sweep: { points: 3 }\ntolerance: { builds: 2 }\n");
+            var run = CliRun.Of("build", path, "-o", Path.Combine(folder, "out"));
+            Assert.True(run.ExitCode == 0, $"{center} {whip}: {run.FirstErrorLine}");
+            Assert.True(File.Exists(Path.Combine(folder, "out", "starter", "rings.dxf")));
         }
         finally { Directory.Delete(folder, recursive: true); }
     }

@@ -48,6 +48,25 @@ public class QuantityTests
     public void AnglesConvertToRadians(string text, double radians) =>
         Assert.Equal(radians, Assert.IsType<QuantityValue>(Read(QuantityKind.Angle, text)).Si, 12);
 
+    // SI prefixes are case-sensitive (SI Brochure, 9th ed., §3: m = milli, M = mega), so "5800 mhz"
+    // is refused, never guessed, but the refusal names the unit meant.
+    [Theory]
+    [InlineData("5800 mhz", "(did you mean 'MHz'?)")]
+    [InlineData("5.8 ghz", "(did you mean 'GHz'?)")]
+    [InlineData("433 KHZ", "(did you mean 'kHz'?)")]
+    public void AUnitInTheWrongCaseIsRefusedWithTheRightOne(string text, string hint)
+    {
+        var context = new ReadContext("t.yaml", ".");
+        new QuantityField(QuantityKind.Frequency, 1, 1e12).Read(new YamlScalar(new SourceMark(1, 1), text, true), "band.center", context);
+        var error = Assert.Single(context.Errors.InFileOrder());
+        Assert.EndsWith(hint, error.ToString());
+        Assert.False(context.Values.ContainsKey("band.center"));
+    }
+
+    [Fact]
+    public void AnUnknownUnitGetsNoCaseHint() =>
+        Assert.Null(QuantityKind.Frequency.UnitWithOtherCase("mhzz"));
+
     [Fact]
     public void PercentIsAFraction() => Assert.Equal(0.3, Assert.IsType<QuantityValue>(Read(QuantityKind.Percent, "30 %")).Si, 12);
 

@@ -11,6 +11,9 @@ namespace Helipol.Design;
 /// </summary>
 public static class CalibrationFile
 {
+    /// <summary>The keys a calibration file may hold, in the order <see cref="Write"/> writes them.</summary>
+    public static readonly IReadOnlyList<string> Keys = new[] { "material_set", "loading_factor", "fitted_by", "design", "source" };
+
     /// <param name="shownAs">the path as the design wrote it (kept in the result's source line)</param>
     /// <param name="shownInErrors">the path error lines start with, so a user can open it from where helipol ran</param>
     public static CoatingCalibration Read(string path, string? shownAs = null, string? shownInErrors = null)
@@ -28,6 +31,11 @@ public static class CalibrationFile
         }
         if (yaml.Documents.Count == 0 || yaml.Documents[0].RootNode is not YamlMappingNode root)
             throw new CalibrationException($"{shown}:1:1: calibration: found no mapping, allowed a mapping with loading_factor");
+        // A misspelt key (loading_facter) would otherwise be ignored and the built-in factor used
+        // without a word; every key must be one this reader knows.
+        foreach (var key in root.Children.Keys)
+            if (key is not YamlScalarNode { Value: { } name } || !Keys.Contains(name))
+                throw new CalibrationException($"{shown}:{key.Start.Line}:{key.Start.Column}: calibration: found key '{(key as YamlScalarNode)?.Value ?? key.ToString()}', allowed {string.Join(", ", Keys)}");
         string? Text(string key) => root.Children.TryGetValue(new YamlScalarNode(key), out var n) && n is YamlScalarNode s ? s.Value : null;
         if (!root.Children.TryGetValue(new YamlScalarNode("loading_factor"), out var factorNode))
             throw new CalibrationException($"{shown}:{root.Start.Line}:{root.Start.Column}: loading_factor: found nothing, allowed a number ≥ 0");

@@ -28,20 +28,37 @@ public sealed record FabricationLimits(double FormerHeightM, double WireDiameter
     public double MaximumRiseM => FormerHeightM - 2 * EndMarginInWireDiameters * WireDiameterM - WireDiameterM;
 
     /// <summary>Null when the layout can be built; otherwise the first reason it cannot.</summary>
-    public string? Violation(ElementLayout layout)
+    public string? Violation(ElementLayout layout) => Check(layout)?.Reason;
+
+    /// <summary>Null when the layout can be built; otherwise the first reason and which input causes it.</summary>
+    public FabricationViolation? Check(ElementLayout layout)
     {
         double d = WireDiameterM;
-        if (layout.RiseM <= 0) return "rise must be positive";
+        FabricationViolation V(FabricationCause cause, string reason) => new(cause, reason);
+        if (layout.RiseM <= 0) return V(FabricationCause.Rise, "rise must be positive");
         // The bore already clears the whip's cover; a wall thinner than the wire would put the
         // elements inside the cover (or the whip).
-        if ((layout.OuterDiameterM - BoreM) / 2 <= d) return "former wall thinner than the wire (elements would sit inside the cover)";
-        if (layout.RiseM > MaximumRiseM + 1e-12) return "rise does not fit the former height";
-        if (layout.ArcLengthM < MinimumRunFraction * layout.LengthM) return "rise too close to the element length";
-        if (ElementClearance.MinimumAxisDistanceM(layout) < 2 * d + ExtraGapM) return "neighbouring elements too close";
+        if ((layout.OuterDiameterM - BoreM) / 2 <= d) return V(FabricationCause.Wire, "former wall thinner than the wire (elements would sit inside the cover)");
+        // The wire is to blame when its end margins would not fit even at the practice proportion
+        // of rise to former height (12.7 mm in 15.9 mm, PracticeScaling); otherwise the rise is.
+        if (layout.RiseM > MaximumRiseM + 1e-12)
+            return V((2 * EndMarginInWireDiameters + 1) * d > FormerHeightM * (1 - PracticeScaling.ElementRiseAtReferenceM / PracticeScaling.FormerHeightAtReferenceM)
+                ? FabricationCause.Wire : FabricationCause.Rise, "rise does not fit the former height");
+        if (layout.ArcLengthM < MinimumRunFraction * layout.LengthM) return V(FabricationCause.Rise, "rise too close to the element length");
+        if (ElementClearance.MinimumAxisDistanceM(layout) < 2 * d + ExtraGapM) return V(FabricationCause.Length, "neighbouring elements too close");
         double pitchOverTurn = layout.RiseM / layout.ArcAngleRad; // helix c = rise per radian
         double r = layout.AxisRadiusM;
-        if ((r * r + pitchOverTurn * pitchOverTurn) / r < MinimumBendRadiusInWireDiameters * d) return "bend radius too tight";
-        if (OnGround && CentreHeightM - layout.RiseM / 2 < d) return "element touches the ground plane";
+        if ((r * r + pitchOverTurn * pitchOverTurn) / r < MinimumBendRadiusInWireDiameters * d) return V(FabricationCause.Wire, "bend radius too tight");
+        if (OnGround && CentreHeightM - layout.RiseM / 2 < d) return V(FabricationCause.Ground, "element touches the ground plane");
         return null;
     }
+}
+
+/// <summary>The input a builder would change to clear a <see cref="FabricationViolation"/>.</summary>
+public enum FabricationCause { Length, Rise, Wire, Ground }
+
+/// <summary>Why a layout cannot be built, and which input causes it.</summary>
+public sealed record FabricationViolation(FabricationCause Cause, string Reason)
+{
+    public override string ToString() => Reason;
 }

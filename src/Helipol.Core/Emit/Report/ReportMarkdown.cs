@@ -21,7 +21,7 @@ public static class ReportMarkdown
 
         L($"# {design.Name}: solved polarizer");
         L($"");
-        L($"Band {design.Band.LowHz / 1e6:0.###}-{design.Band.HighHz / 1e6:0.###} MHz (centre {centre / 1e6:0.###} MHz), {(design.Whip.Kind == WhipKind.Monopole ? "monopole on a ground plane" : "dipole")} whip {design.Whip.LengthM * 1e3:0.##} mm, wanted sense {sense}.");
+        L($"Band {design.Band.LowHz / 1e6:0.###}-{design.Band.HighHz / 1e6:0.###} MHz (centre {centre / 1e6:0.###} MHz), {design.Whip.LengthM * 1e3:0.##} mm {(design.Whip.Kind == WhipKind.Monopole ? "monopole whip on a ground plane" : "dipole whip")}, wanted sense {sense}.");
         L($"");
         L($"## What to build");
         L($"");

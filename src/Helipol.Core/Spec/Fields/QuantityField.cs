@@ -50,7 +50,7 @@ public sealed class QuantityField : FieldType
         }
         if (!Kind.TryToSi(number, unit, out var si))
         {
-            Fail(context, node, path, $"{YamlScalar.Shorten(text)} (unit '{unit}')", $"{Kind.Noun()} in {string.Join(", ", Kind.UnitsWritten())}");
+            Fail(context, node, path, $"{YamlScalar.Shorten(text)} (unit '{unit}')", $"{Kind.Noun()} in {string.Join(", ", Kind.UnitsWritten())}{Kind.UnitHint(unit)}");
             return;
         }
         var below = MinInclusive ? si < MinSi : si <= MinSi;
