@@ -11,7 +11,7 @@ public static class DesignChecks
     /// <summary>Margin round a ring's contour for its element numbers, mm (the ring templates' layout).</summary>
     public const double RingLabelMarginMm = 5.0;
     /// <summary>Band under each ring for its number and the design name, mm.</summary>
-    public const double RingTextBandMm = 8.0;
+    public const double RingTextBandMm = 11.0;
     /// <summary>Margin inside the board's edge, mm.</summary>
     public const double BoardEdgeMarginMm = 5.0;
 
