@@ -50,9 +50,10 @@ public static class CliApp
             option.Action = new PrintVersion(output);
 
         var parsed = root.Parse(args);
-        if (parsed.Errors.Count > 0)
+        // Any command line that cannot run, in the project's one-line form (never the parser's text).
+        if (CommandLineErrors.Describe(root, parsed) is { } problem)
         {
-            error.WriteLine($"helipol: {parsed.Errors[0].Message} (see 'helipol --help')");
+            error.WriteLine(problem);
             return ExitCodes.BadInput;
         }
         try
