@@ -49,7 +49,8 @@ public static class CliApp
         foreach (var option in root.Options.OfType<VersionOption>())
             option.Action = new PrintVersion(output);
 
-        var parsed = root.Parse(args);
+        // No response files: every word is what it says, so a design named '@x.yaml' is a file name.
+        var parsed = root.Parse(args, new ParserConfiguration { ResponseFileTokenReplacer = null });
         // Any command line that cannot run, in the project's one-line form (never the parser's text).
         if (CommandLineErrors.Describe(root, parsed) is { } problem)
         {

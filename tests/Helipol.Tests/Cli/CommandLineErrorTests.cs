@@ -38,7 +38,13 @@ public class CommandLineErrorTests
         { "analyze x.yaml --from 1GHz --to 2GHz --points many", "helipol analyze: --points: found 'many', allowed a whole number" },
         // unknown choice words
         { "new foo --whip yagi --center 1GHz", "helipol new: --whip: found 'yagi', allowed dipole or monopole" },
+        { "mismatch circular rhcp", "helipol mismatch: A: found 'circular', allowed rhcp, lhcp or linear, with an optional :ARdB and @TILTdeg (e.g. rhcp:1.5dB@30deg)" },
+        { "mismatch rhcp rhcp:1.5", "helipol mismatch: B: found 'rhcp:1.5', allowed an axial ratio as a finite number with its unit, e.g. 1.5dB" },
+        { "mismatch rhcp -1", "helipol mismatch: B: found '-1', allowed rhcp, lhcp or linear, with an optional :ARdB and @TILTdeg (e.g. rhcp:1.5dB@30deg)" },
+        { "mismatch linear:3dB rhcp", "helipol mismatch: A: found 'linear:3dB', allowed linear or linear@TILTdeg (a linear antenna takes no axial ratio)" },
         // missing option values, repeated options
+        { "schema -o", "helipol schema: --output: found no value, allowed file to write instead of stdout (e.g. designs/helipol.schema.json)" },
+        { "solve x.yaml --map", "helipol solve: --map: found no value, allowed PNG file to write the search's axial-ratio map to, as a heat map" },
         { "analyze x.yaml --points", "helipol analyze: --points: found no value, allowed a whole number" },
         { "analyze x.yaml --elevation -10deg --freq", "helipol analyze: --freq: found no value, allowed one frequency, e.g. 5.8GHz" },
         { "build x.yaml -o", "helipol build: --output: found no value, allowed folder that receives one sub-folder per design" },
@@ -60,6 +66,8 @@ public class CommandLineErrorTests
         { "sweep x.yaml -- -x", "helipol sweep: found an extra argument '-x', allowed only FILE" },
         { "schema extra", "helipol schema: found an extra argument 'extra', allowed no arguments" },
         { "mismatch a b c", "helipol mismatch: found an extra argument 'c', allowed only A and B" },
+        // no response files: a word starting with '@' is a file name like any other
+        { "@args.txt", $"helipol: found unknown verb '@args.txt', allowed {Verbs}" },
     };
 
     private static string[] Split(string line) => line.Split(' ', StringSplitOptions.RemoveEmptyEntries);
