@@ -93,7 +93,8 @@ public static class CliApp
         }
         catch (Exception ex)
         {
-            error.WriteLine($"helipol: internal error: {ex.GetType().Name}: {OneLine(ex.Message)}");
+            // No .NET type name on the user's line; HELIPOL_DEBUG=1 adds the exception with its trace.
+            error.WriteLine($"helipol: internal error: {OneLine(ex.Message)} (HELIPOL_DEBUG=1 shows where)");
             Debug(error, ex);
             return ExitCodes.Failure;
         }
