@@ -7,8 +7,11 @@ DESIGNS := $(sort $(wildcard designs/*.yaml))
 # Outside readers the tests use (Debian packages): ezdxf for DXF, admesh for STL, poppler for PDF pages,
 # nec2c (NEC-2) as an independent field solver for the engine.
 APT_PACKAGES := python3-ezdxf admesh poppler-utils nec2c
+# `make install` packs helipol as a .NET tool into this folder and installs it from there.
+TOOL_DIR := .tools
+VERSION := $(shell sed -n 's:.*<Version>\(.*\)</Version>.*:\1:p' Directory.Build.props)
 
-.PHONY: all build run test bench deps clean schema
+.PHONY: all build run test bench deps clean schema install
 
 all: build
 
@@ -27,6 +30,15 @@ test: deps
 
 schema: build
 	$(DOTNET) $(CLI_DLL) schema -o designs/helipol.schema.json
+
+# Packs the tool into $(TOOL_DIR)/ and (re)installs it for this user as the command `helipol`
+# (in ~/.dotnet/tools, which must be on PATH). Only the package registries are contacted.
+install:
+	@rm -f $(TOOL_DIR)/helipol.*.nupkg
+	$(DOTNET) pack src/Helipol.Cli/Helipol.Cli.csproj -c $(CONFIG) -nologo -v quiet -o $(TOOL_DIR)
+	@if $(DOTNET) tool list --global | grep -q '^helipol '; then $(DOTNET) tool uninstall --global helipol; fi
+	$(DOTNET) tool install --global --add-source $(TOOL_DIR) helipol --version $(VERSION)
+	@case ":$$PATH:" in *":$$HOME/.dotnet/tools:"*) ;; *) echo "add ~/.dotnet/tools to PATH to run helipol: export PATH=\"\$$PATH:\$$HOME/.dotnet/tools\"";; esac
 
 bench:
 	$(DOTNET) run --project tests/Helipol.Bench -c Release -- $(BENCH_ARGS)

@@ -1,9 +1,12 @@
 #!/usr/bin/env bash
-# Runs every test and closes with one plain line: "N passed, N failed".
+# Runs every test, printing each result as it finishes, and closes with one plain line:
+# "N passed, N failed, N skipped" (CI reads it).
 set -uo pipefail
 config="${1:-Release}"
 results="$(mktemp -d)"
-dotnet test Helipol.sln -c "$config" -nologo --logger "trx;LogFileName=results.trx" --results-directory "$results"
+# The console logger at normal verbosity prints each test's result as it finishes, so a long run
+# shows its progress; the trx file gives the closing counts.
+dotnet test Helipol.sln -c "$config" -nologo --logger "console;verbosity=normal" --logger "trx;LogFileName=results.trx" --results-directory "$results"
 code=$?
 passed=0; failed=0; skipped=0
 for trx in "$results"/*.trx; do

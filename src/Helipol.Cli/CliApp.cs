@@ -49,10 +49,12 @@ public static class CliApp
         foreach (var option in root.Options.OfType<VersionOption>())
             option.Action = new PrintVersion(output);
 
-        var parsed = root.Parse(args);
-        if (parsed.Errors.Count > 0)
+        // No response files: every word is what it says, so a design named '@x.yaml' is a file name.
+        var parsed = root.Parse(args, new ParserConfiguration { ResponseFileTokenReplacer = null });
+        // Any command line that cannot run, in the project's one-line form (never the parser's text).
+        if (CommandLineErrors.Describe(root, parsed) is { } problem)
         {
-            error.WriteLine($"helipol: {parsed.Errors[0].Message} (see 'helipol --help')");
+            error.WriteLine(problem);
             return ExitCodes.BadInput;
         }
         try
@@ -91,7 +93,8 @@ public static class CliApp
         }
         catch (Exception ex)
         {
-            error.WriteLine($"helipol: internal error: {ex.GetType().Name}: {OneLine(ex.Message)}");
+            // No .NET type name on the user's line; HELIPOL_DEBUG=1 adds the exception with its trace.
+            error.WriteLine($"helipol: internal error: {OneLine(ex.Message)} (HELIPOL_DEBUG=1 shows where)");
             Debug(error, ex);
             return ExitCodes.Failure;
         }

@@ -20,14 +20,16 @@ public static class MismatchVerb
         {
             string ta = parse.GetValue(a)!, tb = parse.GetValue(b)!;
             PolarizationState sa, sb;
+            var at = "A";
             try
             {
                 sa = PolarizationState.Parse(ta);
+                at = "B";
                 sb = PolarizationState.Parse(tb);
             }
             catch (FormatException ex)
             {
-                console.Error.WriteLine($"helipol mismatch: {ex.Message}");
+                console.Error.WriteLine($"helipol mismatch: {at}: {ex.Message}");
                 return ExitCodes.BadInput;
             }
             var inv = CultureInfo.InvariantCulture;

@@ -9,7 +9,7 @@ public static class SchemaVerb
 {
     public static Command Create(CliConsole console)
     {
-        var outputFile = new Option<string?>("--output", "-o") { Description = $"write to this file (e.g. designs/{DesignSchema.FileName}) instead of stdout" };
+        var outputFile = new Option<string?>("--output", "-o") { Description = $"file to write instead of stdout (e.g. designs/{DesignSchema.FileName})" };
         var command = new Command("schema", "Print the JSON Schema (draft 2020-12) of the design file.") { outputFile };
         command.SetAction(parse =>
         {

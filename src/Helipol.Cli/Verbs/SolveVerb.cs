@@ -19,7 +19,7 @@ public static class SolveVerb
     {
         var file = new Argument<string>("FILE") { Description = "design file (.yaml)" };
         var json = new Option<bool>("--json") { Description = "print design.json with the solved values, sweep, tolerance and practice column" };
-        var map = new Option<string>("--map") { Description = "also write the axial-ratio map of the search as a PNG heat map to this file" };
+        var map = new Option<string>("--map") { Description = "PNG file to write the search's axial-ratio map to, as a heat map" };
         var command = new Command("solve", "Solve element length and rise with the field model; show them beside practice scaling.") { file, json, map };
         command.SetAction(parse =>
         {

@@ -84,7 +84,7 @@ public class WriteFaultTests
             using (AtomicFile.InterceptWrites(_ => throw new InvalidOperationException("the writer broke")))
                 run = CliRun.Of("build", QuickBuild, "-o", Path.Combine(folder, "out"));
             Assert.Equal(1, run.ExitCode);
-            Assert.Equal("helipol: internal error: InvalidOperationException: the writer broke\n", run.Error);
+            Assert.Equal("helipol: internal error: the writer broke (HELIPOL_DEBUG=1 shows where)\n", run.Error);
         }
         finally { Directory.Delete(folder, recursive: true); }
     }

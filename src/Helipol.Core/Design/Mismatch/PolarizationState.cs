@@ -44,7 +44,7 @@ public sealed record PolarizationState(PolarizationHand Hand, double AxialRatioD
         var at = s.IndexOf('@');
         if (at >= 0)
         {
-            tiltDeg = ParseNumberWithUnit(s[(at + 1)..], "deg", text, "tilt");
+            tiltDeg = ParseNumberWithUnit(s[(at + 1)..], "deg", text, "a tilt", "30deg");
             s = s[..at];
         }
         var colon = s.IndexOf(':');
@@ -55,28 +55,26 @@ public sealed record PolarizationState(PolarizationHand Hand, double AxialRatioD
             "rhcp" => PolarizationHand.Right,
             "lhcp" => PolarizationHand.Left,
             "linear" => PolarizationHand.Linear,
-            _ => throw new FormatException($"'{text}': polarization '{handText}' is not one of rhcp, lhcp, linear"),
+            _ => throw new FormatException($"found '{text}', allowed rhcp, lhcp or linear, with an optional :ARdB and @TILTdeg (e.g. rhcp:1.5dB@30deg)"),
         };
         if (hand == PolarizationHand.Linear)
         {
             if (arText is not null)
-                throw new FormatException($"'{text}': a linear antenna takes no axial ratio (write linear or linear@30deg)");
+                throw new FormatException($"found '{text}', allowed linear or linear@TILTdeg (a linear antenna takes no axial ratio)");
             return Linear(tiltDeg);
         }
-        var arDb = arText is null ? 0 : ParseNumberWithUnit(arText, "db", text, "axial ratio");
+        var arDb = arText is null ? 0 : ParseNumberWithUnit(arText, "db", text, "an axial ratio", "1.5dB");
         if (arDb < 0)
-            throw new FormatException($"'{text}': axial ratio {arDb.ToString(CultureInfo.InvariantCulture)} dB is negative; allowed: 0 dB or more");
+            throw new FormatException($"found '{text}', allowed an axial ratio of 0 dB or more");
         return new PolarizationState(hand, arDb, tiltDeg);
     }
 
-    private static double ParseNumberWithUnit(string part, string unit, string whole, string what)
+    private static double ParseNumberWithUnit(string part, string unit, string whole, string what, string example)
     {
         var p = part.Trim();
-        if (!p.EndsWith(unit, StringComparison.Ordinal))
-            throw new FormatException($"'{whole}': {what} '{part}' needs its unit ({unit})");
-        var number = p[..^unit.Length].Trim();
-        if (!double.TryParse(number, NumberStyles.Float, CultureInfo.InvariantCulture, out var value) || !double.IsFinite(value))
-            throw new FormatException($"'{whole}': {what} '{part}' is not a finite number");
+        var number = p.EndsWith(unit, StringComparison.Ordinal) ? p[..^unit.Length].Trim() : null;
+        if (number is null || !double.TryParse(number, NumberStyles.Float, CultureInfo.InvariantCulture, out var value) || !double.IsFinite(value))
+            throw new FormatException($"found '{whole}', allowed {what} as a finite number with its unit, e.g. {example}");
         return value;
     }
 
