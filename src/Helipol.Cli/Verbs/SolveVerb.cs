@@ -36,9 +36,11 @@ public static class SolveVerb
                 var sweep = BandSweep.Run(design, solved.Build, counter: counter);
                 var tolerance = ToleranceAnalysis.Run(design, solved.Build, counter: counter);
                 console.Out.Write(SolvedJson.Write(design, solved, sweep, tolerance));
+                VerdictOutput.Show(console, design, solved, tolerance, stdoutIsJson: true);
                 return ExitCodes.Ok;
             }
             Show(console.Tables, design, solved);
+            VerdictOutput.Show(console, design, solved, null, stdoutIsJson: false);
             return ExitCodes.Ok;
         });
         return command;
@@ -78,9 +80,10 @@ public static class SolveVerb
         elements.AddRow("arc angle", Deg(s.Layout.ArcAngleRad), Deg(practice.ArcAngleRad), "derived");
         elements.AddRow("pitch angle", Deg(s.Layout.PitchAngleRad), Deg(practice.PitchAngleRad), "derived");
         elements.AddRow("winding", W(s.Winding), W(s.Practice.Winding) + " (builders' rule)", s.WindingPinned ? "design file" : "field model");
-        elements.AddRow(Markup.Escape($"worst AR, {(s.Sense == Sense.Lhcp ? "LHCP" : "RHCP")}"), Db(s.WorstAxialRatioDb),
-            s.Practice.ObjectiveDb is null ? "not modelled" : Db(s.Practice.Points.Max(p => p.WorstScoreDb)), "field model");
+        elements.AddRow("worst axial ratio", Markup.Escape(ReportMarkdown.Worst(s.Points, s.Sense)),
+            Markup.Escape(ReportMarkdown.Worst(s.Practice.Points, s.Sense, s.Practice.ObjectiveDb is null)), "field model");
         elements.AddRow("gain, wanted sense", Db(s.MeanGainDbic) + "ic", "", "field model");
+        elements.AddRow(Markup.Escape($"realized gain, {d.Solve.ReceiverOhm.ToString("0.#", CultureInfo.InvariantCulture)} Ω"), Db(s.MeanRealizedGainDbic) + "ic", "", "field model");
         console.Write(elements);
         console.WriteLine(string.Create(CultureInfo.InvariantCulture,
             $"Calibration factor {s.Calibration.Factor:0.###}: {s.Calibration.Source}{(s.Calibration.IsBorrowedFor(d.Polarizer) ? $"; measured on {s.Calibration.MaterialSet}, borrowed for {CoatingCalibration.MaterialSetOf(d.Polarizer)}" : "")}."));
@@ -90,5 +93,5 @@ public static class SolveVerb
         console.WriteLine("Practice scaling: the 5.8 GHz rule of thumb scaled by wavelength; not a solved result.");
     }
 
-    private static string Db(double db) => db.ToString("0.0", CultureInfo.InvariantCulture) + " dB";
+    private static string Db(double db) => SignedNumber.Plain(db, "0.0") + " dB";
 }
