@@ -25,6 +25,9 @@ public sealed record ToleranceResult(
     /// <summary>Axial-ratio limit the yield was judged against, dB (the design's <c>solve.axial_ratio_limit</c>).</summary>
     public double LimitDb { get; init; } = 3;
 
+    /// <summary>Share of builds whose axial-ratio grade is not <c>fails</c>: wanted sense everywhere, AR within the limit + 3 dB.</summary>
+    public double UsableYield { get; init; } = double.NaN;
+
     /// <summary>± length error (every element alike) that keeps the best-AR frequency inside the band in 90 % of builds, mm; 0 when the nominal best AR is outside the band, NaN without a slope.</summary>
     public double CutToleranceMm { get; init; } = double.NaN;
 
@@ -33,7 +36,7 @@ public sealed record ToleranceResult(
 
     /// <summary>"cut to within ± x mm" in words, for the report and the bend sheet.</summary>
     public string CutText => !double.IsFinite(CutToleranceMm)
-        ? "no cut tolerance: the best axial ratio has no minimum near the band"
+        ? string.Create(System.Globalization.CultureInfo.InvariantCulture, $"no cut tolerance: the axial ratio has no minimum within {LimitDb:0.#} dB near the band to hold in it")
         : CutToleranceMm <= 0
             ? "no cut tolerance: the best axial ratio lies outside the band even as designed"
             : string.Create(System.Globalization.CultureInfo.InvariantCulture, $"cut to within ±{CutToleranceMm:0.0#} mm (rise ±{RiseToleranceMm:0.0#} mm) to keep the best axial ratio inside the band in 90 % of builds");
@@ -101,14 +104,18 @@ public static class ToleranceAnalysis
         double arH = (Ar(Shift(0, step)) - Ar(Shift(0, -step))) / (2 * step * 1e3);
         double fL = (BestArFrequencyHz(design, Shift(step, 0), counter) - BestArFrequencyHz(design, Shift(-step, 0), counter)) / (2 * step * 1e3) / 1e6;
         double fH = (BestArFrequencyHz(design, Shift(0, step), counter) - BestArFrequencyHz(design, Shift(0, -step), counter)) / (2 * step * 1e3) / 1e6;
-        double best = BestArFrequencyHz(design, nominal, counter);
+        double best = BestArFrequencyHz(design, nominal, counter, out double bestScore);
         var advice = TrimmingHint.For(design.Band.CenterHz, best, fL, PolarizerSearch.PolishStepAt5800MHzM * scale * 1e3, t.ElementLengthM * 1e3);
         advice = KeepSense(design, nominal, advice, counter);
-        var (cut, rise) = CutTolerance.For(design.Band.LowHz, design.Band.HighHz, best, fL, fH, t.ElementLengthM * 1e3, t.ElementRiseM * 1e3);
+        // A best AR that never reaches the limit is no target to hold in the band.
+        var (cut, rise) = bestScore <= s.AxialRatioLimitDb
+            ? CutTolerance.For(design.Band.LowHz, design.Band.HighHz, best, fL, fH, t.ElementLengthM * 1e3, t.ElementRiseM * 1e3)
+            : (double.NaN, double.NaN);
         return new ToleranceResult(count, t.Seed, yield, worst, Percentile(sorted, 0.1), Percentile(sorted, 0.5), Percentile(sorted, 0.9),
             arL, arH, fL, fH, best, advice.LengthChangeMm, advice.Text, advice.Summary, counter.Count - before)
         {
             LimitDb = s.AxialRatioLimitDb,
+            UsableYield = worst.Count(w => w <= s.AxialRatioLimitDb + VerdictJudge.MarginalArExtraDb) / (double)count,
             CutToleranceMm = cut,
             RiseToleranceMm = rise,
         };
@@ -156,7 +163,11 @@ public static class ToleranceAnalysis
     /// Frequency of the best objective score (worst or mean, as <c>solve.objective</c>) over the coverage window, over the centre ± 8 % in 33 steps
     /// with a parabolic refinement; NaN when the lowest sample is at either end (no minimum inside).
     /// </summary>
-    public static double BestArFrequencyHz(PolarizerDesign design, PolarizerBuild build, FieldSolveCounter? counter = null)
+    public static double BestArFrequencyHz(PolarizerDesign design, PolarizerBuild build, FieldSolveCounter? counter = null) =>
+        BestArFrequencyHz(design, build, counter, out _);
+
+    /// <summary>As above; <paramref name="bestScore"/> is the lowest sampled score (the worst axial ratio there while under 30 dB in the wanted sense).</summary>
+    public static double BestArFrequencyHz(PolarizerDesign design, PolarizerBuild build, FieldSolveCounter? counter, out double bestScore)
     {
         double fc = design.Band.CenterHz;
         var freqs = Enumerable.Range(0, 33).Select(i => fc * (0.92 + 0.16 * i / 32)).ToArray();
@@ -165,6 +176,7 @@ public static class ToleranceAnalysis
         var score = PolarizerEvaluator.Evaluate(build, freqs, plan.Directions, design.Polarizer.Sense, counter)
             .Select(p => design.Solve.Objective == Objective.MeanAxialRatio ? p.MeanScoreDb : p.WorstScoreDb).ToArray();
         int k = Array.IndexOf(score, score.Min());
+        bestScore = score[k];
         if (k == 0 || k == score.Length - 1) return double.NaN;
         double a = score[k - 1], b = score[k], c = score[k + 1];
         double denom = a - 2 * b + c;

@@ -79,7 +79,7 @@ public static class VerdictJudge
         if (tolerance is not null)
         {
             Grade g = tolerance.Yield >= WorksYield ? Grade.Works : Grade.Marginal;
-            reasons.Add(string.Create(inv, $"yield {tolerance.Yield * 100:0.#} % of {tolerance.Builds} simulated builds keep the axial ratio ≤ {limit:0.#} dB in the wanted sense over the band and window: {g.Word()}"));
+            reasons.Add(string.Create(inv, $"yield {tolerance.Yield * 100:0.#} % of {tolerance.Builds} simulated builds keep the axial ratio ≤ {limit:0.#} dB in the wanted sense over the band and window ({tolerance.UsableYield * 100:0.#} % stay within {limit + MarginalArExtraDb:0.#} dB, short of failing): {g.Word()}"));
             grades.Add(g);
         }
 
@@ -100,7 +100,11 @@ public static class VerdictJudge
         if (arGrade != Grade.Works)
         {
             if (solved.Search.LimitsReached.Count > 0) return $"widen the search ({solved.Search.LimitsReached[0]})";
-            if (solved.LengthPinned || solved.RisePinned) return "let the solver choose: set polarizer.element_length and polarizer.element_rise to auto";
+            if (solved.LengthPinned || solved.RisePinned)
+            {
+                var keys = new[] { solved.LengthPinned ? "polarizer.element_length" : null, solved.RisePinned ? "polarizer.element_rise" : null }.Where(k => k is not null);
+                return $"let the solver choose: set {string.Join(" and ", keys)} to auto";
+            }
             if (NarrowerWindow(design, solved) is { } w) return w;
             if (solved.CountPinned && solved.Layout.Count < 8) return "more elements (polarizer.elements: auto)";
             return string.Create(inv, $"a larger former: more than {solved.Layout.OuterDiameterM * 1e3:0} mm across (polarizer.former.outer_diameter, solve.search.outer_diameter)");

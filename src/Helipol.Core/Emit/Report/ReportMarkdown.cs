@@ -96,7 +96,7 @@ public static class ReportMarkdown
         L($"");
         L($"{tolerance.Builds} simulated builds (seed {tolerance.Seed}; every element ±{design.Tolerance.ElementLengthM * 1e3:0.##} mm in length, ±{design.Tolerance.ElementRiseM * 1e3:0.##} mm in rise, ±{design.Tolerance.AzimuthRad * 180 / Math.PI:0.#}° in placement; wrap ±{design.Tolerance.WrapThicknessFraction * 100:0}% thick), judged like the verdict: at band low, centre and high over the coverage window ({VerdictJudge.Window(design)}, elevations at least 10° apart, every 10° of azimuth):");
         L($"");
-        L($"- yield (every direction {sense} with axial ratio ≤ {tolerance.LimitDb:0.#} dB): {tolerance.Yield * 100:0.#} %");
+        L($"- yield (every direction {sense} with axial ratio ≤ {tolerance.LimitDb:0.#} dB): {tolerance.Yield * 100:0.#} %; short of failing (≤ {tolerance.LimitDb + VerdictJudge.MarginalArExtraDb:0.#} dB): {tolerance.UsableYield * 100:0.#} %");
         L($"- worst axial ratio percentiles (wrong sense counts as infinite): 10 % {ArText(tolerance.ArP10Db)}, median {ArText(tolerance.ArP50Db)}, 90 % {ArText(tolerance.ArP90Db)}");
         L($"- {tolerance.CutText}");
         L($"- sensitivity at the centre on the analysis cone: {SignedNumber.Format(tolerance.ArPerMmLengthDb)} dB of axial ratio per mm of length, {SignedNumber.Format(tolerance.ArPerMmRiseDb)} dB per mm of rise");

@@ -121,6 +121,7 @@ public static class SolvedJson
                 j.WriteNumber("seed", tolerance.Seed);
                 Number(j, "yield", tolerance.Yield);
                 Number(j, "axial_ratio_limit_db", tolerance.LimitDb);
+                Number(j, "usable_yield", tolerance.UsableYield);
                 Number(j, "cut_tolerance_mm", tolerance.CutToleranceMm);
                 Number(j, "rise_tolerance_mm", tolerance.RiseToleranceMm);
                 j.WriteString("cut_tolerance", tolerance.CutText);
