@@ -80,8 +80,8 @@ public static class SolveVerb
         elements.AddRow("arc angle", Deg(s.Layout.ArcAngleRad), Deg(practice.ArcAngleRad), "derived");
         elements.AddRow("pitch angle", Deg(s.Layout.PitchAngleRad), Deg(practice.PitchAngleRad), "derived");
         elements.AddRow("winding", W(s.Winding), W(s.Practice.Winding) + " (builders' rule)", s.WindingPinned ? "design file" : "field model");
-        elements.AddRow("worst axial ratio", Markup.Escape(ReportMarkdown.Worst(s.Points, s.Sense)),
-            Markup.Escape(ReportMarkdown.Worst(s.Practice.Points, s.Sense, s.Practice.ObjectiveDb is null)), "field model");
+        elements.AddRow(Markup.Escape($"worst AR, {(s.Sense == Sense.Lhcp ? "LHCP" : "RHCP")}"), Markup.Escape(Short(s.Points)),
+            s.Practice.ObjectiveDb is null ? "not modelled" : Markup.Escape(Short(s.Practice.Points)), "field model");
         elements.AddRow("gain, wanted sense", Db(s.MeanGainDbic) + "ic", "", "field model");
         elements.AddRow(Markup.Escape($"realized gain, {d.Solve.ReceiverOhm.ToString("0.#", CultureInfo.InvariantCulture)} Ω"), Db(s.MeanRealizedGainDbic) + "ic", "", "field model");
         console.Write(elements);
@@ -91,6 +91,15 @@ public static class SolveVerb
         foreach (var limit in s.Search.LimitsReached)
             console.WriteLine($"At a search limit: {limit}; the optimum may lie beyond it.");
         console.WriteLine("Practice scaling: the 5.8 GHz rule of thumb scaled by wavelength; not a solved result.");
+    }
+
+    /// <summary>The worst true axial ratio in the wanted sense, or the wrong sense that appears instead (short, for a table cell).</summary>
+    private static string Short(IReadOnlyList<FrequencySummary> points)
+    {
+        var w = points.MaxBy(p => p.WorstScoreDb)!;
+        return points.All(p => p.AllWantedSense)
+            ? Db(points.Max(p => p.WorstWantedAxialRatioDb))
+            : $"wrong sense ({SolvedJson.SenseWord(w.Worst.Sense)})";
     }
 
     private static string Db(double db) => SignedNumber.Plain(db, "0.0") + " dB";
