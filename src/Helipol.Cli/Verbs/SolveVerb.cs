@@ -11,7 +11,7 @@ namespace Helipol.Cli.Verbs;
 /// <c>helipol solve FILE [--json]</c>: searches element length and rise (and count and diameter
 /// when auto) with the field model and shows them beside the practice-scaling values. --json
 /// prints design.json with the solved values, the sweep, the tolerance analysis and the practice column;
-/// --map writes the search's axial-ratio map as a PNG heat map.
+/// --map writes the search's objective map (the score it minimized, not an axial ratio) as a PNG heat map.
 /// </summary>
 public static class SolveVerb
 {
@@ -19,7 +19,7 @@ public static class SolveVerb
     {
         var file = new Argument<string>("FILE") { Description = "design file (.yaml)" };
         var json = new Option<bool>("--json") { Description = "print design.json with the solved values, sweep, tolerance and practice column" };
-        var map = new Option<string>("--map") { Description = "also write the axial-ratio map of the search as a PNG heat map to this file" };
+        var map = new Option<string>("--map") { Description = "also write the search's objective map (its score over length × rise, not an axial ratio) as a PNG heat map to this file" };
         var command = new Command("solve", "Solve element length and rise with the field model; show them beside practice scaling.") { file, json, map };
         command.SetAction(parse =>
         {

@@ -130,7 +130,8 @@ public static class ToleranceAnalysis
     {
         double change = advice.LengthChangeMm;
         if (!double.IsFinite(change) || advice.Text.StartsWith("no trimming needed", StringComparison.Ordinal)) return advice;
-        var plan = EvaluationPlan.ForSearch(design, nominal.ElementCount);
+        // The plan of the solve's own band table: every band frequency, the whole coverage window.
+        var plan = EvaluationPlan.ForDesign(design, nominal.ElementCount);
         var sense = design.Polarizer.Sense;
         IReadOnlyList<FrequencySummary> At(double dMm) => PolarizerEvaluator.Evaluate(
             nominal with { Elements = nominal.Elements.Select(e => e with { LengthM = e.LengthM + dMm * 1e-3 }).ToArray() },

@@ -20,7 +20,9 @@ public static class PacketSummary
         var verdict = VerdictJudge.For(design, solved, tolerance);
         return
         [
-            new("Verdict", $"{verdict.Grade.Word().ToUpperInvariant()}: {verdict.Figures}; next: {verdict.NextStep}"),
+            new("Verdict", verdict.Grade.Word().ToUpperInvariant()),
+            new("Deciding figures", verdict.Figures),
+            new("Next step", verdict.NextStep),
             new("Design", design.Name),
             new("Band", F($"{design.Band.LowHz / 1e9:0.####} - {design.Band.HighHz / 1e9:0.####} GHz (centre {design.Band.CenterHz / 1e9:0.####} GHz)")),
             new("Whip", F($"{(design.Whip.Kind == WhipKind.Dipole ? "dipole" : "monopole")}, {design.Whip.LengthM * 1000:0.##} mm")),

@@ -45,7 +45,7 @@ public static class ReportMarkdown
         L($"");
         L($"## How it was solved");
         L($"");
-        L($"A thin-wire method-of-moments model of the whip and the elements (triangle basis, Galerkin, reduced kernel) is solved at {design.Solve.FrequencyCount} frequencies across the band; the far field is sampled every {design.Solve.AzimuthStepRad * 180 / Math.PI:0.#}° of azimuth at elevations {design.Solve.ElevationFromRad * 180 / Math.PI:0.#}° to {design.Solve.ElevationToRad * 180 / Math.PI:0.#}°. The objective is the {(design.Solve.Objective == Objective.MeanAxialRatio ? "mean" : "worst")} axial ratio in the wanted sense (a wrong-sense direction always scores worse than any right-sense one) minus {design.Solve.GainWeight:0.##} × the mean {sense} gain in dBic.");
+        L($"A thin-wire method-of-moments model of the whip and the elements (triangle basis, Galerkin, reduced kernel) is solved at {design.Solve.FrequencyCount} frequencies across the band; the far field is sampled every {design.Solve.AzimuthStepRad * 180 / Math.PI:0.#}° of azimuth at elevations {SignedNumber.Plain(design.Solve.ElevationFromRad * 180 / Math.PI, "0.#")}° to {SignedNumber.Plain(design.Solve.ElevationToRad * 180 / Math.PI, "0.#")}°{(design.Solve.AzimuthSpanRad < 2 * Math.PI - 1e-9 ? $", azimuths within ±{design.Solve.AzimuthSpanRad * 90 / Math.PI:0.#}°" : "")}. The objective is the {(design.Solve.Objective == Objective.MeanAxialRatio ? "mean" : "worst")} axial ratio in the wanted sense (a wrong-sense direction always scores worse than any right-sense one) minus {design.Solve.GainWeight:0.##} × the mean {sense} gain in dBic.");
         foreach (var step in s.Search.Steps) L($"- {step}");
         L($"- {s.Search.Evaluations} geometries scored, {s.FieldSolves} field solves in all.");
         L($"");
@@ -83,14 +83,14 @@ public static class ReportMarkdown
         L($"");
         L($"![azimuth cut](pattern-azimuth.png) ![elevation cut](pattern-elevation.png)");
         L($"");
-        L($"## Axial-ratio map");
+        L($"## Search map");
         L($"");
         if (s.Search.Map.LengthsM.Length * s.Search.Map.RisesM.Length == 1)
             L($"Element length and rise are both pinned, so there was no map to search: the plot holds the one geometry as written.");
         else
             L($"The coarse search map over element length × rise ({s.Search.Map.ElementCount} elements on {s.Search.Map.OuterDiameterM * 1e3:0.#} mm; blank cells cannot be built). Its colours are the search's objective score, not an axial ratio: the score equals the worst axial ratio only while that is under 30 dB in the wanted sense, and grows on through linear into the wrong sense. The cross marks the solution.");
         L($"");
-        L($"![axial-ratio map](ar-map.png)");
+        L($"![search objective map](ar-map.png)");
         L($"");
         L($"## Tolerance");
         L($"");

@@ -97,6 +97,7 @@ public static class SolvedJson
                 Number(j, "best_axial_ratio_frequency_hz", sweep.BestArFrequencyHz);
                 Number(j, "best_axial_ratio_db", sweep.BestArDb);
                 j.WriteBoolean("best_axial_ratio_inside_sweep", sweep.BestArInsideSweep);
+                Number(j, "axial_ratio_limit_db", sweep.LimitDb);
                 Number(j, "axial_ratio_3db_low_hz", sweep.BandwidthLowHz);
                 Number(j, "axial_ratio_3db_high_hz", sweep.BandwidthHighHz);
                 Number(j, "axial_ratio_3db_bandwidth_hz", sweep.BandwidthHz);
