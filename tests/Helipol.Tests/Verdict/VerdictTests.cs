@@ -117,6 +117,28 @@ public class VerdictTests
             Assert.Contains(cut.GetDouble().ToString("0.0#", System.Globalization.CultureInfo.InvariantCulture), t.GetProperty("cut_tolerance").GetString());
     }
 
+    // The bend sheet (read back with PdfPig, an outside PDF reader) prints the cut figure beside the
+    // element length, and page 1 of the packet opens with the verdict.
+    [Fact]
+    public void TheBendSheetAndPacketCarryTheCutFigureAndVerdict()
+    {
+        var r = VerdictRuns.Get;
+        using var doc = r.GoodJson();
+        var solved = doc.RootElement.GetProperty("solved");
+        var cut = solved.GetProperty("tolerance").GetProperty("cut_tolerance_mm");
+        using (var sheet = UglyToad.PdfPig.PdfDocument.Open(r.Output(VerdictRuns.GoodDemo, "bend-sheet.pdf")))
+        {
+            var text = string.Join(" ", sheet.GetPages().Select(p => string.Join(" ", p.GetWords().Select(w => w.Text))));
+            if (cut.ValueKind == JsonValueKind.Number && cut.GetDouble() > 0)
+                Assert.Contains($"cut to within ± {cut.GetDouble().ToString("0.00", System.Globalization.CultureInfo.InvariantCulture)} mm", text);
+            else
+                Assert.Contains("tolerance ±", text);
+        }
+        using var packet = UglyToad.PdfPig.PdfDocument.Open(r.Output(VerdictRuns.GoodDemo, "packet.pdf"));
+        var first = string.Join(" ", packet.GetPage(1).GetWords().Select(w => w.Text));
+        Assert.Contains("Verdict " + solved.GetProperty("verdict").GetProperty("grade").GetString()!.ToUpperInvariant(), first);
+    }
+
     private sealed class PrefixComparer : IEqualityComparer<string?>
     {
         public bool Equals(string? x, string? y) => x is not null && y is not null && (x.StartsWith(y, StringComparison.Ordinal) || y.StartsWith(x, StringComparison.Ordinal));

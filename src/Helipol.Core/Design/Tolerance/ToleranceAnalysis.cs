@@ -36,7 +36,7 @@ public sealed record ToleranceResult(
 
     /// <summary>"cut to within ± x mm" in words, for the report and the bend sheet.</summary>
     public string CutText => !double.IsFinite(CutToleranceMm)
-        ? string.Create(System.Globalization.CultureInfo.InvariantCulture, $"no cut tolerance: the axial ratio has no minimum within {LimitDb:0.#} dB near the band to hold in it")
+        ? string.Create(System.Globalization.CultureInfo.InvariantCulture, $"no cut tolerance: the axial ratio has no minimum within {LimitDb + VerdictJudge.MarginalArExtraDb:0.#} dB near the band to hold in it")
         : CutToleranceMm <= 0
             ? "no cut tolerance: the best axial ratio lies outside the band even as designed"
             : string.Create(System.Globalization.CultureInfo.InvariantCulture, $"cut to within ±{CutToleranceMm:0.0#} mm (rise ±{RiseToleranceMm:0.0#} mm) to keep the best axial ratio inside the band in 90 % of builds");
@@ -107,8 +107,8 @@ public static class ToleranceAnalysis
         double best = BestArFrequencyHz(design, nominal, counter, out double bestScore);
         var advice = TrimmingHint.For(design.Band.CenterHz, best, fL, PolarizerSearch.PolishStepAt5800MHzM * scale * 1e3, t.ElementLengthM * 1e3);
         advice = KeepSense(design, nominal, advice, counter);
-        // A best AR that never reaches the limit is no target to hold in the band.
-        var (cut, rise) = bestScore <= s.AxialRatioLimitDb
+        // A best AR that fails even at its best is no target to hold in the band.
+        var (cut, rise) = bestScore <= s.AxialRatioLimitDb + VerdictJudge.MarginalArExtraDb
             ? CutTolerance.For(design.Band.LowHz, design.Band.HighHz, best, fL, fH, t.ElementLengthM * 1e3, t.ElementRiseM * 1e3)
             : (double.NaN, double.NaN);
         return new ToleranceResult(count, t.Seed, yield, worst, Percentile(sorted, 0.1), Percentile(sorted, 0.5), Percentile(sorted, 0.9),

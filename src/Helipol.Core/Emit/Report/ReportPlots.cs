@@ -103,6 +103,8 @@ public static class ReportPlots
         plt.XLabel("frequency (MHz)");
         plt.YLabel("axial ratio (dB)");
         plt.Axes.Right.Label.Text = "gain (dBic)";
+        // Negative gains with the true minus sign, like every other figure helipol prints.
+        plt.Axes.Right.TickGenerator = new ScottPlot.TickGenerators.NumericAutomatic { LabelFormatter = v => SignedNumber.Plain(v, "0.##") };
         plt.ShowLegend(Alignment.UpperRight);
         return Png(plt, Width, Height, ImageFormat.Png);
     }

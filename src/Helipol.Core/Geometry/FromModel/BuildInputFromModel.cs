@@ -58,6 +58,7 @@ public static class BuildInputFromModel
             Dpi = f.Dpi,
             LengthToleranceMm = cutToleranceMm is { } c && double.IsFinite(c.LengthMm) && c.LengthMm > 0 ? c.LengthMm : t.ElementLengthM * MmPerM,
             RiseToleranceMm = cutToleranceMm is { } r && double.IsFinite(r.RiseMm) && r.RiseMm > 0 ? r.RiseMm : t.ElementRiseM * MmPerM,
+            ToleranceIsCutFigure = cutToleranceMm is { } k && double.IsFinite(k.LengthMm) && k.LengthMm > 0,
             FrequencyHz = design.Band.CenterHz,
             SummaryLines = summary ?? [],
             PlotPngs = plotPngs ?? [],
