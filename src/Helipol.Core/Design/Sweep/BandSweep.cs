@@ -13,7 +13,14 @@ public sealed record SweepPoint(FrequencySummary Polarizer, double BareWhipVswr5
 }
 
 /// <summary>Gain in the right- and left-hand senses along one pattern cut, dBic, at angles in degrees.</summary>
-public sealed record PatternCut(string Name, double FrequencyHz, double[] AnglesDeg, double[] GainRhcpDbic, double[] GainLhcpDbic);
+public sealed record PatternCut(string Name, double FrequencyHz, double[] AnglesDeg, double[] GainRhcpDbic, double[] GainLhcpDbic)
+{
+    /// <summary>Mismatch to the receiver at this frequency, 10·log10(1 − |Γ|²) dB: realized gain = gain + this, in every direction.</summary>
+    public double MismatchDb { get; init; }
+
+    /// <summary>The receiver resistance <see cref="MismatchDb"/> refers to, Ω.</summary>
+    public double ReceiverOhm { get; init; } = 50;
+}
 
 /// <summary>
 /// A frequency sweep of a solved geometry and what is read from it: the bandwidth where the true axial ratio in the wanted sense stays within the limit, the whip's
@@ -117,6 +124,9 @@ public static class BandSweep
         var azL = s.GainLhcp.Take(72).Select(Db).ToArray();
         var elR = s.GainRhcp.Skip(72).Select(Db).ToArray();
         var elL = s.GainLhcp.Skip(72).Select(Db).ToArray();
-        return (new PatternCut("azimuth", design.Band.CenterHz, azAngles, azR, azL), new PatternCut("elevation", design.Band.CenterHz, elAngles, elR, elL));
+        double receiver = design.Solve.ReceiverOhm;
+        double mismatch = s.Summarize(design.Polarizer.Sense, receiver).MismatchDb;
+        return (new PatternCut("azimuth", design.Band.CenterHz, azAngles, azR, azL) { MismatchDb = mismatch, ReceiverOhm = receiver },
+            new PatternCut("elevation", design.Band.CenterHz, elAngles, elR, elL) { MismatchDb = mismatch, ReceiverOhm = receiver });
     }
 }

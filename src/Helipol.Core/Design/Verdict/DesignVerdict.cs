@@ -112,6 +112,14 @@ public static class VerdictJudge
         if (advantage <= WorksGainDb && vswr > bareVswr)
             return string.Create(inv, $"match the whip to the receiver: the polarizer raises VSWR from {Vswr(bareVswr)} to {Vswr(vswr)}");
         if (vswr > WorksVswr) return string.Create(inv, $"match the whip to the receiver (VSWR {Vswr(vswr)})");
+        if (tolerance is not null && tolerance.Yield < WorksYield)
+        {
+            double spreadMm = design.Tolerance.ElementLengthM * 1e3;
+            if (double.IsFinite(tolerance.CutToleranceMm) && tolerance.CutToleranceMm < spreadMm)
+                return string.Create(inv, $"cut every element to within ±{tolerance.CutToleranceMm:0.0#} mm, tighter than the ±{spreadMm:0.0#} mm assumed (tolerance.element_length)");
+            string median = double.IsFinite(tolerance.ArP50Db) ? string.Create(inv, $"{tolerance.ArP50Db:0.0} dB") : "the wrong sense";
+            return string.Create(inv, $"more axial-ratio margin: build errors take the worst axial ratio past {design.Solve.AxialRatioLimitDb:0.#} dB (median build {median}); {(solved.CountPinned ? "more elements or " : "")}a narrower coverage window (solve.elevations, solve.azimuth_span)");
+        }
         if (tolerance is not null && double.IsFinite(tolerance.CutToleranceMm))
             return string.Create(inv, $"{(grade == Grade.Works ? "build it; " : "")}cut every element to within ±{tolerance.CutToleranceMm:0.0#} mm and hold the rise to ±{tolerance.RiseToleranceMm:0.0#} mm");
         return grade == Grade.Works ? "build it" : "run 'helipol tolerance' to see how precisely to cut";

@@ -171,7 +171,7 @@ public static class ReportPlots
         plt.Axes.Frameless();
         plt.HideGrid();
         // A frameless plot has no title panel: the title goes in as an annotation.
-        plt.Add.Annotation(FormattableString.Invariant($"{title}; outer ring {top:0} dBic, 5 dB per ring"), Alignment.UpperLeft);
+        plt.Add.Annotation(FormattableString.Invariant($"{title}; outer ring {SignedNumber.Plain(top, "0")} dBic, 5 dB per ring\nrealized gain into {cut.ReceiverOhm:0.#} Ω = gain {SignedNumber.Format(cut.MismatchDb, "0.00")} dB (mismatch)"), Alignment.UpperLeft);
         return Png(plt, PolarSize, PolarSize, ImageFormat.Png);
     }
 
