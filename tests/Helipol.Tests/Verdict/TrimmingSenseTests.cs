@@ -11,6 +11,19 @@ namespace Helipol.Tests.Verdict;
 /// </summary>
 public class TrimmingSenseTests
 {
+    // A cut-down or refused hint says why, in the window's terms.
+    [Fact]
+    public void ACutDownHintNamesTheFlip()
+    {
+        var full = Helipol.Design.TrimmingHint.For(868e6, 850e6, -6.5, 1.34, 1.0);
+        var limited = Helipol.Design.TrimmingHint.Limited(full, full.LengthChangeMm / 2, "868 MHz, 45° elevation");
+        Assert.Equal(full.LengthChangeMm / 2, limited.LengthChangeMm, 12);
+        Assert.Contains("flips the sense at 868 MHz, 45° elevation", limited.Text);
+        var refused = Helipol.Design.TrimmingHint.Refused(full, "868 MHz, 45° elevation");
+        Assert.Equal(0, refused.LengthChangeMm);
+        Assert.StartsWith("no trimming", refused.Text);
+    }
+
     [Fact]
     public void TheHintedChangeKeepsTheWantedSenseInTheWindow()
     {
@@ -22,7 +35,8 @@ public class TrimmingSenseTests
             var solved = root["solved"]!.AsObject();
             bool nominalRight = solved["band"]!.AsArray().All(p => p!["wrong_sense_share"]!.GetValue<double>() == 0);
             var change = solved["tolerance"]!["length_change_to_centre_mm"];
-            if (!nominalRight || change is null) continue;
+            // A change the hint itself calls too small to cut is not proposed.
+            if (!nominalRight || change is null || solved["tolerance"]!["trimming_hint"]!.GetValue<string>().StartsWith("no trimming", StringComparison.Ordinal)) continue;
             double changeMm = change.GetValue<double>();
             solved["element_length_m"] = solved["element_length_m"]!.GetValue<double>() + changeMm * 1e-3;
             var path = Path.Combine(TestPaths.NewTempFolder(), "design.json");

@@ -122,22 +122,24 @@ public static class ToleranceAnalysis
     }
 
     /// <summary>
-    /// A proposed length change is tried on the objective's own plan (band frequencies and coverage
-    /// window); if it puts any direction into the wrong sense, or raises the worst axial ratio, it is
-    /// halved up to three times, and dropped when no such step is safe.
+    /// A proposed length change is tried on the objective's own plan (every band frequency, the whole
+    /// coverage window); if it puts any direction into the wrong sense that was right before (more
+    /// wrong-sense directions than the nominal build has), it is halved up to three times, and dropped
+    /// when no step is safe.
     /// </summary>
     private static TrimmingAdvice KeepSense(PolarizerDesign design, PolarizerBuild nominal, TrimmingAdvice advice, FieldSolveCounter counter)
     {
         double change = advice.LengthChangeMm;
         if (!double.IsFinite(change) || advice.Text.StartsWith("no trimming needed", StringComparison.Ordinal)) return advice;
-        // The plan of the solve's own band table: every band frequency, the whole coverage window.
         var plan = EvaluationPlan.ForDesign(design, nominal.ElementCount);
         var sense = design.Polarizer.Sense;
         IReadOnlyList<FrequencySummary> At(double dMm) => PolarizerEvaluator.Evaluate(
             nominal with { Elements = nominal.Elements.Select(e => e with { LengthM = e.LengthM + dMm * 1e-3 }).ToArray() },
             plan.FrequenciesHz, plan.Directions, sense, counter);
-        double nominalScore;
-        try { nominalScore = At(0).Max(p => p.WorstScoreDb); }
+        // Directions off the wanted sense, summed over the band (a linear deciding direction counts too).
+        static double Wrong(IReadOnlyList<FrequencySummary> points) => points.Sum(p => p.AllWantedSense ? 0 : Math.Max(p.WrongSenseShare, 1e-9));
+        double nominalWrong;
+        try { nominalWrong = Wrong(At(0)); }
         catch (ModelException) { return advice; }
         string? flipped = null;
         for (int halving = 0; halving < 4; halving++)
@@ -146,16 +148,14 @@ public static class ToleranceAnalysis
             IReadOnlyList<FrequencySummary> points;
             try { points = At(d); }
             catch (ModelException) { continue; }
-            var wrong = points.FirstOrDefault(p => !p.AllWantedSense);
-            if (wrong is not null)
+            if (Wrong(points) > nominalWrong + 1e-12)
             {
+                var at = points.First(p => !p.AllWantedSense);
                 flipped ??= string.Create(System.Globalization.CultureInfo.InvariantCulture,
-                    $"{wrong.FrequencyHz / 1e6:0.#} MHz, {wrong.Worst.Direction.ElevationRad * 180 / Math.PI:0.#}° elevation");
+                    $"{at.FrequencyHz / 1e6:0.#} MHz, {SignedNumber.Plain(at.Worst.Direction.ElevationRad * 180 / Math.PI, "0.#")}° elevation");
                 continue;
             }
-            if (points.Max(p => p.WorstScoreDb) > nominalScore) continue;
-            if (halving == 0) return advice;
-            return TrimmingHint.Limited(advice, d, flipped);
+            return halving == 0 ? advice : TrimmingHint.Limited(advice, d, flipped);
         }
         return TrimmingHint.Refused(advice, flipped);
     }

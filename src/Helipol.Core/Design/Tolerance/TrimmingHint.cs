@@ -44,21 +44,21 @@ public static class TrimmingHint
         return new(change, text, summary);
     }
 
-    /// <summary>The hint cut down to <paramref name="changeMm"/>, because the full step put part of the coverage window into the wrong sense (or raised the worst axial ratio).</summary>
+    /// <summary>The hint cut down to <paramref name="changeMm"/>, because the full step put part of the coverage window into the wrong sense.</summary>
     public static TrimmingAdvice Limited(TrimmingAdvice full, double changeMm, string? flippedAt)
     {
         var inv = CultureInfo.InvariantCulture;
-        string why = flippedAt is null ? "the full step raises the worst axial ratio in the coverage window" : $"the full step flips the sense at {flippedAt}, inside the coverage window";
+        string why = flippedAt is null ? "the full step cannot be modelled" : $"the full step flips the sense at {flippedAt}, inside the coverage window";
         string verb = changeMm < 0 ? string.Create(inv, $"trim {-changeMm:0.00} mm off every element") : string.Create(inv, $"cut the elements {changeMm:0.00} mm longer");
         return new(changeMm, string.Create(inv, $"{verb}, not the full {Math.Abs(full.LengthChangeMm):0.00} mm: {why}"),
             string.Create(inv, $"{(changeMm < 0 ? "trim" : "lengthen")} every element {Math.Abs(changeMm):0.00} mm (a larger change flips the sense)"));
     }
 
-    /// <summary>No hint: every tried step toward the centre put part of the window into the wrong sense or made the worst axial ratio worse.</summary>
+    /// <summary>No hint: every tried step toward the centre put part of the window into the wrong sense.</summary>
     public static TrimmingAdvice Refused(TrimmingAdvice full, string? flippedAt)
     {
         var inv = CultureInfo.InvariantCulture;
-        string why = flippedAt is null ? "raises the worst axial ratio in the coverage window" : $"flips the sense at {flippedAt}, inside the coverage window";
+        string why = flippedAt is null ? "cannot be modelled" : $"flips the sense at {flippedAt}, inside the coverage window";
         return new(0, string.Create(inv, $"no trimming: moving the best axial ratio toward the centre ({(full.LengthChangeMm < 0 ? "trimming" : "lengthening")} up to {Math.Abs(full.LengthChangeMm):0.00} mm) {why}; keep the solved length"),
             "none: a change toward the centre would spoil the coverage window");
     }
