@@ -94,6 +94,18 @@ public class VerdictTests
         Assert.Contains("evaluates practice scaling", run.Out.Split('\n')[0]);
     }
 
+    // --solve evaluates the solution, not practice scaling: no key is named practice-scaled.
+    [Fact]
+    public void AnalyzeWithSolveEvaluatesTheSolution()
+    {
+        var run = CliRun.Of("analyze", Path.Combine(TestPaths.Designs, VerdictRuns.GoodDemo + ".yaml"), "--solve", "--freq", "915MHz", "--json");
+        Assert.True(run.ExitCode == 0, run.FirstErrorLine);
+        using var doc = JsonDocument.Parse(run.Out);
+        Assert.Equal("solved first (--solve)", doc.RootElement.GetProperty("geometry").GetString());
+        Assert.Empty(doc.RootElement.GetProperty("practice_scaled_keys").EnumerateArray());
+        Assert.DoesNotContain("practice scaling", run.Error);
+    }
+
     [Fact]
     public void AnalyzeRefusesAFileThatIsNoDesignJson()
     {
