@@ -13,28 +13,67 @@ using Spectre.Console;
 namespace Helipol.Cli.Verbs;
 
 /// <summary>
-/// <c>helipol analyze FILE [--freq F | --from F1 --to F2 --points N] [--elevation DEG] [--json]</c>:
-/// evaluates the geometry written in the file (no search; auto keys at practice scaling, labelled): impedance, VSWR against 50 Ω and, on a
-/// cone at the given elevation every 5° of azimuth, mean and worst AR, sense and circular gains.
+/// <c>helipol analyze FILE [--solve] [--freq F | --from F1 --to F2 --points N] [--elevation DEG] [--json]</c>:
+/// evaluates one geometry (no search) and prints, per frequency, impedance, VSWR and realized gain
+/// against the receiver, and the true axial ratio with its sense on a cone (the given elevation every 5°
+/// of azimuth) and over the design's coverage window. FILE is a design file (auto keys at practice
+/// scaling, said in the first line; with --solve it is solved first and the solution evaluated) or a
+/// design.json written by build or solve (its solved geometry).
 /// </summary>
 public static class AnalyzeVerb
 {
     public static Command Create(CliConsole console)
     {
-        var file = new Argument<string>("FILE") { Description = "design file (.yaml); auto lengths are evaluated at practice scaling, an auto winding at the better of the two" };
+        var file = new Argument<string>("FILE") { Description = "design file (.yaml; auto lengths at practice scaling unless --solve) or a design.json written by build or solve (its solved geometry)" };
+        var solveFirst = new Option<bool>("--solve") { Description = "solve the design file first and evaluate the solution" };
         var freq = new Option<string>("--freq") { Description = "one frequency, e.g. 5.8GHz" };
         var from = new Option<string>("--from") { Description = "first frequency of a sweep" };
         var to = new Option<string>("--to") { Description = "last frequency of a sweep" };
         var points = new Option<int>("--points") { Description = "frequencies from --from to --to", DefaultValueFactory = _ => 11 };
         var elevation = new Option<string>("--elevation") { Description = "cone elevation above the horizon, e.g. 20deg (default 0 for a dipole, 20 for a monopole)" };
         var json = new Option<bool>("--json") { Description = "print JSON" };
-        var command = new Command("analyze", "Evaluate the geometry written in a design (no search): impedance, VSWR, axial ratio, sense and gains per frequency.")
-            { file, freq, from, to, points, elevation, json };
+        var command = new Command("analyze", "Evaluate one geometry (no search): impedance, VSWR, realized gain, true axial ratio and sense per frequency.")
+            { file, solveFirst, freq, from, to, points, elevation, json };
         command.SetAction(parse =>
         {
-            var designs = DesignLoader.LoadAll(new[] { parse.GetValue(file)! }, console);
-            if (designs is null) return ExitCodes.BadInput;
-            var design = designs[0];
+            var path = parse.GetValue(file)!;
+            PolarizerDesign design;
+            PolarizerBuild? solvedBuild = null;
+            string source;
+            if (SolvedDesignFile.Is(path))
+            {
+                if (parse.GetValue(solveFirst))
+                {
+                    console.Error.WriteLine($"helipol analyze: --solve: found it with a design.json, allowed with a design file only (design.json is already solved)");
+                    return ExitCodes.BadInput;
+                }
+                var loaded = SolvedDesignFile.Read(path, out var readError);
+                if (loaded is null)
+                {
+                    console.Error.WriteLine(readError);
+                    return ExitCodes.BadInput;
+                }
+                if (DesignRefusal.LineFor(loaded.Design) is { } refused)
+                {
+                    console.Error.WriteLine(refused);
+                    return ExitCodes.BadInput;
+                }
+                design = loaded.Design;
+                solvedBuild = loaded.Build;
+                source = "solved geometry from design.json";
+            }
+            else
+            {
+                var designs = DesignLoader.LoadAll(new[] { path }, console);
+                if (designs is null) return ExitCodes.BadInput;
+                design = designs[0];
+                source = "as written";
+                if (parse.GetValue(solveFirst))
+                {
+                    solvedBuild = SolveRunner.Solve(console, design, new FieldSolveCounter()).Build;
+                    source = "solved first (--solve)";
+                }
+            }
             var freqs = Frequencies(design, parse.GetValue(freq), parse.GetValue(from), parse.GetValue(to), parse.GetValue(points), out var problem);
             double elevationRad = AnalysisCone.DefaultElevationRad(design.Whip.Kind);
             if (problem is null && parse.GetValue(elevation) is { } e)
@@ -49,32 +88,56 @@ public static class AnalyzeVerb
                 return ExitCodes.BadInput;
             }
             var cone = ObservationSet.Cone(elevationRad, 5 * Math.PI / 180);
-            IReadOnlyList<FrequencySummary> result;
+            var window = EvaluationPlan.ForDesign(design).Directions;
+            IReadOnlyList<(FrequencySummary Cone, FrequencySummary Window)> result;
             PolarizerBuild build;
-            IReadOnlyList<string> practiceKeys;
-            bool windingChosen;
+            IReadOnlyList<string> practiceKeys = Array.Empty<string>();
+            bool windingChosen = false;
             try
             {
-                build = SolveRunner.AnalysisBuild(design, cone, out practiceKeys, out windingChosen);
-                result = PolarizerEvaluator.Evaluate(build, freqs!, cone, design.Polarizer.Sense);
+                build = solvedBuild ?? SolveRunner.AnalysisBuild(design, cone, out practiceKeys, out windingChosen);
+                result = Evaluate(build, freqs!, cone, window, design);
             }
             catch (ModelException ex)
             {
                 console.Error.WriteLine($"{design.SourceFile}: polarizer: found a geometry the field model refuses ({ex.Message}), allowed wires that do not touch and are thin enough");
                 return ExitCodes.BadInput;
             }
-            if (parse.GetValue(json)) console.Out.Write(Json(design, build, elevationRad, result, practiceKeys, windingChosen));
+            if (practiceKeys.Count > 0) source = "practice scaling for the auto keys";
+            string? note = practiceKeys.Count > 0
+                ? $"{design.Name}: evaluates practice scaling, not a solution: {string.Join(", ", practiceKeys)} are auto in the file and take practice-scaling values (run 'helipol analyze FILE --solve' or analyze the build's design.json)"
+                : null;
+            if (parse.GetValue(json))
+            {
+                if (note is not null) console.Error.WriteLine(note);
+                console.Out.Write(Json(design, build, elevationRad, result, practiceKeys, windingChosen, source));
+            }
             else
             {
-                Table(console, design, build, elevationRad, result);
-                if (practiceKeys.Count > 0)
-                    console.Out.WriteLine($"{string.Join(", ", practiceKeys)}: auto in the file, evaluated at practice scaling (not solved; run 'helipol solve' to choose).");
+                if (note is not null) console.Out.WriteLine(note);
+                Table(console, design, build, elevationRad, result, source);
                 if (windingChosen)
                     console.Out.WriteLine("polarizer.winding: auto in the file; the winding that radiates the wanted sense better at the band centre was taken.");
             }
             return ExitCodes.Ok;
         });
         return command;
+    }
+
+    /// <summary>One solve per frequency, sampled on the cone and over the coverage window.</summary>
+    private static IReadOnlyList<(FrequencySummary Cone, FrequencySummary Window)> Evaluate(PolarizerBuild build, IReadOnlyList<double> freqs,
+        ObservationSet cone, ObservationSet window, PolarizerDesign design)
+    {
+        int nc = cone.Directions.Count;
+        var all = ObservationSet.Of(cone.Directions.Concat(window.Directions));
+        var sense = design.Polarizer.Sense;
+        double receiver = design.Solve.ReceiverOhm;
+        return PolarizerEvaluator.Sample(build, freqs, all).Select(s =>
+        {
+            var c = new CircularSamples(s.FrequencyHz, s.ImpedanceOhm, cone.Directions, s.GainRhcp[..nc], s.GainLhcp[..nc]);
+            var w = new CircularSamples(s.FrequencyHz, s.ImpedanceOhm, window.Directions, s.GainRhcp[nc..], s.GainLhcp[nc..]);
+            return (c.Summarize(sense, receiver), w.Summarize(sense, receiver));
+        }).ToArray();
     }
 
     internal static double[]? Frequencies(PolarizerDesign design, string? freq, string? from, string? to, int points, out string? problem)
@@ -112,35 +175,38 @@ public static class AnalyzeVerb
         return freqs;
     }
 
-    private static string Json(PolarizerDesign design, PolarizerBuild build, double elevationRad, IReadOnlyList<FrequencySummary> result,
-        IReadOnlyList<string> practiceKeys, bool windingChosen)
+    private static string Json(PolarizerDesign design, PolarizerBuild build, double elevationRad, IReadOnlyList<(FrequencySummary Cone, FrequencySummary Window)> result,
+        IReadOnlyList<string> practiceKeys, bool windingChosen, string source)
     {
         using var buffer = new MemoryStream();
         using (var j = new Utf8JsonWriter(buffer, new JsonWriterOptions { Indented = false, Encoder = JavaScriptEncoder.UnsafeRelaxedJsonEscaping }))
         {
             j.WriteStartObject();
             j.WriteString("name", design.Name);
+            j.WriteString("geometry", source);
             j.WriteNumber("element_length_mm", build.ElementLengthM * 1e3);
             j.WriteNumber("element_rise_mm", build.ElementRiseM * 1e3);
             j.WriteString("winding", build.Winding == Winding.Left ? "left" : "right");
             j.WriteStartArray("points");
-            foreach (var p in result)
+            foreach (var (c, w) in result)
             {
                 j.WriteStartObject();
-                j.WriteNumber("frequency_hz", p.FrequencyHz);
+                j.WriteNumber("frequency_hz", c.FrequencyHz);
                 j.WriteStartArray("impedance_ohm");
-                j.WriteNumberValue(p.ImpedanceOhm.Real);
-                j.WriteNumberValue(p.ImpedanceOhm.Imaginary);
+                j.WriteNumberValue(c.ImpedanceOhm.Real);
+                j.WriteNumberValue(c.ImpedanceOhm.Imaginary);
                 j.WriteEndArray();
-                Number(j, "vswr_50", p.Vswr50);
                 j.WriteStartObject("cut");
                 j.WriteNumber("elevation_deg", elevationRad * 180 / Math.PI);
-                j.WriteNumber("axial_ratio_db_mean", p.MeanAxialRatioDb);
-                j.WriteNumber("axial_ratio_db_max", p.WorstAxialRatioDb);
-                j.WriteString("sense", SolvedJson.SenseWord(p.Sense));
-                j.WriteNumber("gain_rhcp_dbic", p.GainRhcpDbic);
-                j.WriteNumber("gain_lhcp_dbic", p.GainLhcpDbic);
+                SolvedJson.WritePoint(j, c);
                 j.WriteEndObject();
+                j.WriteStartObject("window");
+                j.WriteString("coverage", VerdictJudge.Window(design));
+                SolvedJson.WritePoint(j, w);
+                j.WriteEndObject();
+                Number(j, "vswr_50", c.Vswr50);
+                Number(j, "receiver_impedance_ohm", c.ReceiverOhm);
+                Number(j, "vswr", c.Vswr);
                 j.WriteEndObject();
             }
             j.WriteEndArray();
@@ -163,22 +229,24 @@ public static class AnalyzeVerb
         else j.WriteNull(name);
     }
 
-    private static void Table(CliConsole console, PolarizerDesign design, PolarizerBuild build, double elevationRad, IReadOnlyList<FrequencySummary> result)
+    private static void Table(CliConsole console, PolarizerDesign design, PolarizerBuild build, double elevationRad, IReadOnlyList<(FrequencySummary Cone, FrequencySummary Window)> result, string source)
     {
         var inv = CultureInfo.InvariantCulture;
         // The heading is a plain line (a terminal wraps it), not a table title that widens the table.
         console.Out.WriteLine(string.Create(inv,
-                $"{design.Name}: {build.ElementCount} × {build.ElementLengthM * 1e3:0.##} mm elements, rise {build.ElementRiseM * 1e3:0.##} mm, {(build.Winding == Winding.Left ? "left" : "right")} winding; cone at {elevationRad * 180 / Math.PI:0.#}°"));
+                $"{design.Name} ({source}): {build.ElementCount} × {build.ElementLengthM * 1e3:0.##} mm elements, rise {build.ElementRiseM * 1e3:0.##} mm, {(build.Winding == Winding.Left ? "left" : "right")} winding; cone at {elevationRad * 180 / Math.PI:0.#}°; window {VerdictJudge.Window(design)}"));
         var t = new Table()
             // Units go in the caption and the cells stay bare numbers, so the table fits an
             // 80-column terminal without truncating a header.
-            .Caption("impedance in Ω, VSWR against 50 Ω, AR in dB, gains in dBic")
-            .AddColumn("MHz").AddColumn("impedance").AddColumn("VSWR").AddColumn("AR mean").AddColumn("AR worst").AddColumn("sense").AddColumn("RHCP").AddColumn("LHCP");
-        foreach (var p in result)
-            t.AddRow(Markup.Escape(string.Create(inv, $"{p.FrequencyHz / 1e6:0.###}")),
-                Markup.Escape(string.Create(inv, $"{p.ImpedanceOhm.Real:0.0}{(p.ImpedanceOhm.Imaginary < 0 ? "-" : "+")}j{Math.Abs(p.ImpedanceOhm.Imaginary):0.0}")),
-                p.Vswr50.ToString("0.00", inv), p.MeanAxialRatioDb.ToString("0.0", inv), p.WorstAxialRatioDb.ToString("0.0", inv),
-                SolvedJson.SenseWord(p.Sense), p.GainRhcpDbic.ToString("0.00", inv), p.GainLhcpDbic.ToString("0.00", inv));
+            .Caption(Markup.Escape(string.Create(inv, $"Ω; VSWR and realized gain (real.) against {design.Solve.ReceiverOhm:0.#} Ω; AR: true axial ratio (dB) of the worst direction with its sense; gains in dBic")))
+            .AddColumn("MHz").AddColumn("impedance").AddColumn("VSWR").AddColumn("cone AR").AddColumn("window AR").AddColumn("RHCP").AddColumn("LHCP").AddColumn("real.");
+        string Ar(FrequencySummary p) => string.Create(inv, $"{p.Worst.AxialRatioDb:0.0} {SolvedJson.SenseWord(p.Worst.Sense)}{(p.AllWantedSense ? "" : "!")}");
+        foreach (var (c, w) in result)
+            t.AddRow(Markup.Escape(string.Create(inv, $"{c.FrequencyHz / 1e6:0.###}")),
+                Markup.Escape(string.Create(inv, $"{c.ImpedanceOhm.Real:0.0}{(c.ImpedanceOhm.Imaginary < 0 ? "−" : "+")}j{Math.Abs(c.ImpedanceOhm.Imaginary):0.0}")),
+                c.Vswr.ToString("0.00", inv), Markup.Escape(Ar(c)), Markup.Escape(Ar(w)),
+                SignedNumber.Plain(c.GainRhcpDbic, "0.00"), SignedNumber.Plain(c.GainLhcpDbic, "0.00"), SignedNumber.Plain(c.RealizedGainDbic(design.Polarizer.Sense), "0.00"));
         console.Tables.Write(t);
+        console.Out.WriteLine("AR marked ! has the wrong sense in part of the cone or window.");
     }
 }

@@ -19,7 +19,8 @@ public static class BuildVerb
     {
         var files = new Argument<string[]>("FILE") { Description = "design files (.yaml)", Arity = ArgumentArity.OneOrMore };
         var outputDir = new Option<string>("--output", "-o") { Description = "folder that receives one sub-folder per design", DefaultValueFactory = _ => "output" };
-        var command = new Command("build", "Check and solve designs, then write output/<name>/: design.json, report.md, plots and the fabrication files.") { files, outputDir };
+        var strict = new Option<bool>("--strict") { Description = "exit with code 3 when any design's verdict is 'fails' (the files are still written)" };
+        var command = new Command("build", "Check and solve designs, then write output/<name>/: design.json, report.md, plots and the fabrication files.") { files, outputDir, strict };
         command.SetAction(parse =>
         {
             var designs = DesignLoader.LoadAll(parse.GetValue(files)!, console);
@@ -33,6 +34,7 @@ public static class BuildVerb
                 return ExitCodes.BadInput;
             }
             var results = new List<(PolarizerDesign Design, IReadOnlyList<(string Name, byte[] Bytes)> Files, long Solves)>();
+            var judged = new List<(PolarizerDesign Design, SolvedPolarizer Solved, ToleranceResult Tolerance)>();
             foreach (var design in designs)
             {
                 var counter = new FieldSolveCounter();
@@ -59,6 +61,7 @@ public static class BuildVerb
                     return ExitCodes.Failure;
                 }
                 results.Add((design, made, counter.Count));
+                judged.Add((design, solved, tolerance));
             }
             var root = parse.GetValue(outputDir)!;
             // Every file of every design is staged before any is renamed into place (AtomicFile.WriteAll).
@@ -67,7 +70,10 @@ public static class BuildVerb
             {
                 console.Out.WriteLine($"wrote {Path.Combine(root, design.Name)}/ ({string.Join(", ", made.Select(m => m.Name))}; {solves} field solves)");
             }
-            return ExitCodes.Ok;
+            bool anyFails = false;
+            foreach (var (design, solved, tolerance) in judged)
+                anyFails |= VerdictOutput.Show(console, design, solved, tolerance, stdoutIsJson: false).Grade == Grade.Fails;
+            return anyFails && parse.GetValue(strict) ? VerdictOutput.FailsExitCode : ExitCodes.Ok;
         });
         return command;
     }
@@ -78,7 +84,8 @@ public static class BuildVerb
     {
         string[] packetPlots = ["ar-gain.png", "pattern-azimuth.png", "pattern-elevation.png"];
         var plots = packetPlots.Select(n => report.First(r => r.Name == n).Bytes).ToList();
-        var input = BuildInputFromModel.Create(design, solved.Layout, solved.Winding, PacketSummary.Lines(design, solved, sweep, tolerance), plots);
+        var input = BuildInputFromModel.Create(design, solved.Layout, solved.Winding, PacketSummary.Lines(design, solved, sweep, tolerance), plots,
+            (tolerance.CutToleranceMm, tolerance.RiseToleranceMm));
         return FabricationSet.Render(input);
     }
 }

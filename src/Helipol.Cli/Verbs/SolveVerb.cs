@@ -11,7 +11,7 @@ namespace Helipol.Cli.Verbs;
 /// <c>helipol solve FILE [--json]</c>: searches element length and rise (and count and diameter
 /// when auto) with the field model and shows them beside the practice-scaling values. --json
 /// prints design.json with the solved values, the sweep, the tolerance analysis and the practice column;
-/// --map writes the search's axial-ratio map as a PNG heat map.
+/// --map writes the search's objective map (the score it minimized, not an axial ratio) as a PNG heat map.
 /// </summary>
 public static class SolveVerb
 {
@@ -19,7 +19,7 @@ public static class SolveVerb
     {
         var file = new Argument<string>("FILE") { Description = "design file (.yaml)" };
         var json = new Option<bool>("--json") { Description = "print design.json with the solved values, sweep, tolerance and practice column" };
-        var map = new Option<string>("--map") { Description = "PNG file to write the search's axial-ratio map to, as a heat map" };
+        var map = new Option<string>("--map") { Description = "PNG file to write the search's objective map to, as a heat map; its score over length × rise, not an axial ratio" };
         var command = new Command("solve", "Solve element length and rise with the field model; show them beside practice scaling.") { file, json, map };
         command.SetAction(parse =>
         {
@@ -36,9 +36,11 @@ public static class SolveVerb
                 var sweep = BandSweep.Run(design, solved.Build, counter: counter);
                 var tolerance = ToleranceAnalysis.Run(design, solved.Build, counter: counter);
                 console.Out.Write(SolvedJson.Write(design, solved, sweep, tolerance));
+                VerdictOutput.Show(console, design, solved, tolerance, stdoutIsJson: true);
                 return ExitCodes.Ok;
             }
             Show(console.Tables, design, solved);
+            VerdictOutput.Show(console, design, solved, null, stdoutIsJson: false);
             return ExitCodes.Ok;
         });
         return command;
@@ -78,9 +80,10 @@ public static class SolveVerb
         elements.AddRow("arc angle", Deg(s.Layout.ArcAngleRad), Deg(practice.ArcAngleRad), "derived");
         elements.AddRow("pitch angle", Deg(s.Layout.PitchAngleRad), Deg(practice.PitchAngleRad), "derived");
         elements.AddRow("winding", W(s.Winding), W(s.Practice.Winding) + " (builders' rule)", s.WindingPinned ? "design file" : "field model");
-        elements.AddRow(Markup.Escape($"worst AR, {(s.Sense == Sense.Lhcp ? "LHCP" : "RHCP")}"), Db(s.WorstAxialRatioDb),
-            s.Practice.ObjectiveDb is null ? "not modelled" : Db(s.Practice.Points.Max(p => p.WorstScoreDb)), "field model");
+        elements.AddRow(Markup.Escape($"worst AR, {(s.Sense == Sense.Lhcp ? "LHCP" : "RHCP")}"), Markup.Escape(Short(s.Points)),
+            s.Practice.ObjectiveDb is null ? "not modelled" : Markup.Escape(Short(s.Practice.Points)), "field model");
         elements.AddRow("gain, wanted sense", Db(s.MeanGainDbic) + "ic", "", "field model");
+        elements.AddRow(Markup.Escape($"realized gain, {d.Solve.ReceiverOhm.ToString("0.#", CultureInfo.InvariantCulture)} Ω"), Db(s.MeanRealizedGainDbic) + "ic", "", "field model");
         console.Write(elements);
         console.WriteLine(string.Create(CultureInfo.InvariantCulture,
             $"Calibration factor {s.Calibration.Factor:0.###}: {s.Calibration.Source}{(s.Calibration.IsBorrowedFor(d.Polarizer) ? $"; measured on {s.Calibration.MaterialSet}, borrowed for {CoatingCalibration.MaterialSetOf(d.Polarizer)}" : "")}."));
@@ -90,5 +93,14 @@ public static class SolveVerb
         console.WriteLine("Practice scaling: the 5.8 GHz rule of thumb scaled by wavelength; not a solved result.");
     }
 
-    private static string Db(double db) => db.ToString("0.0", CultureInfo.InvariantCulture) + " dB";
+    /// <summary>The worst true axial ratio in the wanted sense, or the wrong sense that appears instead (short, for a table cell).</summary>
+    private static string Short(IReadOnlyList<FrequencySummary> points)
+    {
+        var w = points.MaxBy(p => p.WorstScoreDb)!;
+        return points.All(p => p.AllWantedSense)
+            ? Db(points.Max(p => p.WorstWantedAxialRatioDb))
+            : $"wrong sense ({SolvedJson.SenseWord(w.Worst.Sense)})";
+    }
+
+    private static string Db(double db) => SignedNumber.Plain(db, "0.0") + " dB";
 }

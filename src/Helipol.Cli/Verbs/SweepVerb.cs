@@ -35,21 +35,29 @@ public static class SweepVerb
             if (parse.GetValue(json))
             {
                 console.Out.Write(SolvedJson.Write(design, solved, sweep));
+                VerdictOutput.Show(console, design, solved, null, stdoutIsJson: true);
                 return ExitCodes.Ok;
             }
             var inv = CultureInfo.InvariantCulture;
             var t = new Table().Title(Markup.Escape($"{design.Name}: sweep of the solved polarizer ({sweep.Points.Count} points)"))
-                .AddColumn("frequency").AddColumn("worst AR").AddColumn("RHCP").AddColumn("LHCP").AddColumn("VSWR").AddColumn("bare VSWR");
+                .Caption(Markup.Escape(string.Create(inv, $"AR: true axial ratio of the worst direction on the cone, with its sense; realized gain into {design.Solve.ReceiverOhm:0.#} Ω")))
+                .AddColumn("frequency").AddColumn("AR").AddColumn("sense").AddColumn("RHCP").AddColumn("LHCP").AddColumn("realized").AddColumn("VSWR").AddColumn("bare VSWR");
             int every = Math.Max(1, sweep.Points.Count / 20);
             for (int i = 0; i < sweep.Points.Count; i += every)
             {
                 var p = sweep.Points[i];
-                t.AddRow(string.Create(inv, $"{p.Polarizer.FrequencyHz / 1e6:0.#} MHz"), string.Create(inv, $"{p.Polarizer.WorstScoreDb:0.0} dB"),
-                    string.Create(inv, $"{p.Polarizer.GainRhcpDbic:0.00} dBic"), string.Create(inv, $"{p.Polarizer.GainLhcpDbic:0.00} dBic"),
-                    p.Polarizer.Vswr50.ToString("0.00", inv), p.BareWhipVswr50.ToString("0.00", inv));
+                var sense = p.Polarizer.AllWantedSense ? SolvedJson.SenseWord(p.Polarizer.Worst.Sense) : $"{SolvedJson.SenseWord(p.Polarizer.Worst.Sense)} (wrong)";
+                t.AddRow(string.Create(inv, $"{p.Polarizer.FrequencyHz / 1e6:0.#} MHz"), string.Create(inv, $"{p.Polarizer.Worst.AxialRatioDb:0.0} dB"), Markup.Escape(sense),
+                    SignedNumber.Plain(p.Polarizer.GainRhcpDbic, "0.00") + " dBic", SignedNumber.Plain(p.Polarizer.GainLhcpDbic, "0.00") + " dBic",
+                    SignedNumber.Plain(p.Polarizer.RealizedGainDbic(design.Polarizer.Sense), "0.00") + " dBic",
+                    p.Polarizer.Vswr.ToString("0.00", inv), p.BareWhipVswr.ToString("0.00", inv));
             }
             console.Tables.Write(t);
-            console.Out.WriteLine(string.Create(inv, $"{(sweep.BestArInsideSweep ? "best AR" : sweep.BestArAtTopEdge ? "AR minimum above the sweep; at its top edge" : "AR minimum below the sweep; at its bottom edge")} {sweep.BestArDb:0.0} dB at {sweep.BestArFrequencyHz / 1e6:0.#} MHz; AR ≤ 3 dB bandwidth {sweep.BandwidthHz / 1e6:0.#} MHz ({sweep.BandwidthHz / design.Band.CenterHz * 100:0.##} %); {counter.Count} field solves"));
+            string best = !double.IsFinite(sweep.BestArDb)
+                ? string.Create(inv, $"wrong sense on part of the cone even at the best point, {sweep.BestArFrequencyHz / 1e6:0.#} MHz")
+                : string.Create(inv, $"{(sweep.BestArInsideSweep ? "best AR" : sweep.BestArAtTopEdge ? "AR minimum above the sweep; at its top edge" : "AR minimum below the sweep; at its bottom edge")} {sweep.BestArDb:0.0} dB at {sweep.BestArFrequencyHz / 1e6:0.#} MHz");
+            console.Out.WriteLine(string.Create(inv, $"{best}; AR ≤ {sweep.LimitDb:0.#} dB bandwidth {sweep.BandwidthHz / 1e6:0.#} MHz ({sweep.BandwidthHz / design.Band.CenterHz * 100:0.##} %); {counter.Count} field solves"));
+            VerdictOutput.Show(console, design, solved, null, stdoutIsJson: false);
             return ExitCodes.Ok;
         });
         return command;

@@ -33,19 +33,23 @@ public static class ToleranceVerb
             if (parse.GetValue(json))
             {
                 console.Out.Write(SolvedJson.Write(design, solved, tolerance: t));
+                VerdictOutput.Show(console, design, solved, t, stdoutIsJson: true);
                 return ExitCodes.Ok;
             }
             var inv = CultureInfo.InvariantCulture;
             console.Out.WriteLine(string.Create(inv, $"{design.Name}: {t.Builds} builds (seed {t.Seed}) around {solved.Layout.LengthM * 1e3:0.00} mm × {solved.Layout.RiseM * 1e3:0.00} mm"));
-            console.Out.WriteLine(string.Create(inv, $"  yield (worst AR ≤ 3 dB at band low, centre, high): {t.Yield * 100:0.#} %"));
-            console.Out.WriteLine(string.Create(inv, $"  worst AR: 10 % {t.ArP10Db:0.0} dB, median {t.ArP50Db:0.0} dB, 90 % {t.ArP90Db:0.0} dB"));
-            console.Out.WriteLine(string.Create(inv, $"  AR per mm: {t.ArPerMmLengthDb:+0.0;-0.0} dB (length), {t.ArPerMmRiseDb:+0.0;-0.0} dB (rise)"));
+            string Ar(double db) => double.IsFinite(db) ? string.Create(inv, $"{db:0.0} dB") : "wrong sense";
+            console.Out.WriteLine(string.Create(inv, $"  yield (every direction of the window in the wanted sense with AR ≤ {t.LimitDb:0.#} dB at band low, centre, high): {t.Yield * 100:0.#} %"));
+            console.Out.WriteLine($"  worst AR: 10 % {Ar(t.ArP10Db)}, median {Ar(t.ArP50Db)}, 90 % {Ar(t.ArP90Db)}");
+            console.Out.WriteLine($"  {t.CutText}");
+            console.Out.WriteLine($"  AR per mm: {SignedNumber.Format(t.ArPerMmLengthDb)} dB (length), {SignedNumber.Format(t.ArPerMmRiseDb)} dB (rise)");
             if (double.IsFinite(t.BestArMHzPerMmLength) && double.IsFinite(t.BestArMHzPerMmRise))
-                console.Out.WriteLine(string.Create(inv, $"  best-AR frequency per mm: {t.BestArMHzPerMmLength:+0.0;-0.0} MHz (length), {t.BestArMHzPerMmRise:+0.0;-0.0} MHz (rise)"));
+                console.Out.WriteLine($"  best-AR frequency per mm: {SignedNumber.Format(t.BestArMHzPerMmLength)} MHz (length), {SignedNumber.Format(t.BestArMHzPerMmRise)} MHz (rise)");
             else
                 console.Out.WriteLine("  best-AR frequency per mm: not defined (no AR minimum within ±8 % of the centre)");
             console.Out.WriteLine($"  {t.TrimmingHint}");
             console.Out.WriteLine(string.Create(inv, $"  {t.FieldSolves} field solves in the tolerance analysis, {counter.Count} in all"));
+            VerdictOutput.Show(console, design, solved, t, stdoutIsJson: false);
             return ExitCodes.Ok;
         });
         return command;

@@ -17,12 +17,15 @@ public static class PolarizerSolver
         var search = PolarizerSearch.Run(design, calibration.Factor, counter, progress);
         var plan = EvaluationPlan.ForDesign(design);
         var build = PolarizerBuild.From(design, search.ElementCount, search.ElementLengthM, search.ElementRiseM, search.OuterDiameterM, search.Winding, calibration.Factor);
-        var points = PolarizerEvaluator.Evaluate(build, plan.FrequenciesHz, plan.Directions, design.Polarizer.Sense, counter);
+        var points = PolarizerEvaluator.Evaluate(build, plan.FrequenciesHz, plan.Directions, design.Polarizer.Sense, counter, receiverOhm: design.Solve.ReceiverOhm);
+        var bare = PolarizerEvaluator.SampleBareWhip(design.Whip.Kind, design.Whip.LengthM, design.Whip.RadiusM, plan.FrequenciesHz, plan.Directions, counter,
+            meshFrequencyHz: build.MeshFrequencyHz).Select(x => x.Summarize(design.Polarizer.Sense, design.Solve.ReceiverOhm)).ToArray();
         var layout = new ElementLayout(search.ElementCount, search.ElementLengthM, search.ElementRiseM, search.OuterDiameterM, design.Polarizer.Wire.DiameterM);
         var p = design.Polarizer;
         return new SolvedPolarizer(design.Name, p.Sense, build, layout, search.Winding, calibration,
             plan.ObjectiveOf(points, p.Sense), points, Practice(design, plan, calibration.Factor, counter), search, counter.Count)
         {
+            BareWhip = bare,
             LengthPinned = p.ElementLengthM is not null,
             RisePinned = p.ElementRiseM is not null,
             CountPinned = p.ElementCount is not null,
@@ -39,7 +42,7 @@ public static class PolarizerSolver
         var build = PolarizerBuild.From(design, layout.Count, layout.LengthM, layout.RiseM, layout.OuterDiameterM, winding, factor);
         try
         {
-            var points = PolarizerEvaluator.Evaluate(build, plan.FrequenciesHz, plan.Directions, design.Polarizer.Sense, counter);
+            var points = PolarizerEvaluator.Evaluate(build, plan.FrequenciesHz, plan.Directions, design.Polarizer.Sense, counter, receiverOhm: design.Solve.ReceiverOhm);
             return new PracticeComparison(layout, winding, plan.ObjectiveOf(points, design.Polarizer.Sense), points, null);
         }
         catch (ModelException ex)

@@ -20,11 +20,20 @@ public sealed record SolvedPolarizer(
     SearchOutcome Search,
     long FieldSolves)
 {
-    /// <summary>Worst axial ratio (wanted-sense score, dB) over the band and the elevation window.</summary>
-    public double WorstAxialRatioDb => Points.Max(p => p.WorstScoreDb);
+    /// <summary>The bare whip at the same frequencies and directions as <see cref="Points"/>, for the verdict's comparison.</summary>
+    public IReadOnlyList<FrequencySummary> BareWhip { get; init; } = Array.Empty<FrequencySummary>();
+
+    /// <summary>The point whose deciding direction is worst for the wanted sense (largest search score).</summary>
+    public FrequencySummary WorstPoint => Points.MaxBy(p => p.WorstScoreDb)!;
+
+    /// <summary>Worst true axial ratio in the wanted sense over the band and coverage window, dB; +∞ when some direction has the wrong sense.</summary>
+    public double WorstAxialRatioDb => Points.Max(p => p.WorstWantedAxialRatioDb);
 
     /// <summary>Mean gain in the wanted sense over the band and window, dBic.</summary>
     public double MeanGainDbic => CircularSamples.Db(Points.Average(p => Math.Pow(10, p.GainDbic(Sense) / 10)));
+
+    /// <summary>Mean realized gain in the wanted sense over the band and window, dBic.</summary>
+    public double MeanRealizedGainDbic => CircularSamples.Db(Points.Average(p => Math.Pow(10, p.RealizedGainDbic(Sense) / 10)));
 
     /// <summary>Which key values came from the design file rather than the search.</summary>
     public bool LengthPinned { get; init; }

@@ -54,6 +54,9 @@ public sealed record PolarizerBuildInput
     public PaperSize Paper { get; init; } = PaperSize.A4;
     public int Dpi { get; init; } = 300;
     public double LengthToleranceMm { get; init; } = 0.5;
+
+    /// <summary>True when the length and rise tolerances are the tolerance analysis's "cut to within" figures, false when they are the design's assumed spreads.</summary>
+    public bool ToleranceIsCutFigure { get; init; }
     public double RiseToleranceMm { get; init; } = 0.5;
     /// <summary>Design (centre) frequency, used on labels only.</summary>
     public double FrequencyHz { get; init; }

@@ -148,6 +148,9 @@ public static class DesignJson
         json.WriteNumber("elevation_to_rad", s.ElevationToRad);
         json.WriteNumber("elevation_step_rad", s.ElevationStepRad);
         json.WriteNumber("azimuth_step_rad", s.AzimuthStepRad);
+        json.WriteNumber("azimuth_span_rad", s.AzimuthSpanRad);
+        json.WriteNumber("axial_ratio_limit_db", s.AxialRatioLimitDb);
+        json.WriteNumber("receiver_impedance_ohm", s.ReceiverOhm);
         json.WriteNumber("frequencies", s.FrequencyCount);
         json.WriteNumber("gain_weight", s.GainWeight);
         json.WriteStartObject("search");

@@ -149,7 +149,12 @@ public static class DesignResolver
             doc.Choice("solve.objective") == "mean-ar" ? Objective.MeanAxialRatio : Objective.WorstAxialRatio,
             from, to, doc.Si("solve.elevation_step")!.Value, doc.Si("solve.azimuth_step")!.Value,
             doc.Integer("solve.frequencies"), doc.Number("solve.gain_weight")!.Value, search,
-            new SweepOptions(doc.Integer("solve.sweep.points"), doc.Si("solve.sweep.span")!.Value));
+            new SweepOptions(doc.Integer("solve.sweep.points"), doc.Si("solve.sweep.span")!.Value))
+        {
+            AzimuthSpanRad = doc.Si("solve.azimuth_span")!.Value,
+            AxialRatioLimitDb = doc.Si("solve.axial_ratio_limit")!.Value,
+            ReceiverOhm = doc.Si("solve.receiver_impedance")!.Value,
+        };
     }
 
     private static double? Low(PairValue? pair) => pair?.Low is QuantityValue q ? q.Si : null;

@@ -124,7 +124,17 @@ public sealed record SweepOptions(int Points, double SpanFraction);
 
 /// <summary>How the solver judges a design: axial ratio over a window of elevations, azimuths and frequencies.</summary>
 public sealed record SolveOptions(Objective Objective, double ElevationFromRad, double ElevationToRad, double ElevationStepRad,
-    double AzimuthStepRad, int FrequencyCount, double GainWeight, SearchOptions Search, SweepOptions Sweep);
+    double AzimuthStepRad, int FrequencyCount, double GainWeight, SearchOptions Search, SweepOptions Sweep)
+{
+    /// <summary>Azimuth span of the coverage window, rad (2π = all round), centred on azimuth 0.</summary>
+    public double AzimuthSpanRad { get; init; } = 2 * Math.PI;
+
+    /// <summary>Largest wanted-sense axial ratio that counts as circular, dB.</summary>
+    public double AxialRatioLimitDb { get; init; } = 3;
+
+    /// <summary>Resistance of the radio port that VSWR and realized gain refer to, Ω.</summary>
+    public double ReceiverOhm { get; init; } = 50;
+}
 
 /// <summary>Uniform ± spreads for the Monte Carlo yield; <see cref="WrapThicknessFraction"/> is relative (0.3 = ±30 %).</summary>
 public sealed record ToleranceOptions(int Builds, double ElementLengthM, double ElementRiseM, double AzimuthRad, double WrapThicknessFraction, int Seed);

@@ -111,7 +111,10 @@ public static class DesignKeys
 
     private static readonly MappingField Solve = new(false,
         F("objective", new ChoiceField("worst-ar", "mean-ar"), "worst-ar: the largest axial ratio over band, azimuth and elevation | mean-ar: its mean") with { Default = "worst-ar" },
-        F("elevations", Elevations, "elevation window the axial ratio is judged over"),
+        F("elevations", Elevations, "elevation window of the coverage window the axial ratio is judged over"),
+        F("azimuth_span", new QuantityField(QuantityKind.Angle, 0, 360 * Deg), "azimuth span of the coverage window, centred on azimuth 0 (360 deg = all round)") with { Default = "360 deg" },
+        F("axial_ratio_limit", new QuantityField(QuantityKind.Level, 0.1, 20), "largest axial ratio in the wanted sense that counts as circular, over band and coverage window (verdict, yield)") with { Default = "3 dB" },
+        F("receiver_impedance", new QuantityField(QuantityKind.Resistance, 1, 1000), "resistance of the radio port: VSWR and realized gain are referred to it") with { Default = "50 ohm" },
         F("elevation_step", new QuantityField(QuantityKind.Angle, 0, 45 * Deg), "step across the elevation window") with { Default = "5 deg" },
         F("azimuth_step", new QuantityField(QuantityKind.Angle, 0, 90 * Deg), "step around the azimuth") with { Default = "5 deg" },
         F("frequencies", new IntegerField(1, 101), "frequencies across the band in the objective") with { Default = "5" },

@@ -16,6 +16,10 @@ public enum QuantityKind
     /// <summary>A share written in percent; stored as a fraction (30 % = 0.3).</summary>
     Percent,
     Conductivity,
+    /// <summary>A power ratio in decibels (an axial-ratio limit); stored as dB.</summary>
+    Level,
+    /// <summary>A resistance in ohms (a receiver's reference impedance).</summary>
+    Resistance,
 }
 
 public static class QuantityKinds
@@ -27,6 +31,8 @@ public static class QuantityKinds
         QuantityKind.Angle => "an angle",
         QuantityKind.Percent => "a percentage",
         QuantityKind.Conductivity => "a conductivity",
+        QuantityKind.Level => "a level",
+        QuantityKind.Resistance => "a resistance",
         _ => throw new ArgumentOutOfRangeException(nameof(kind)),
     };
 
@@ -38,6 +44,8 @@ public static class QuantityKinds
         QuantityKind.Angle => new[] { "deg", "°", "rad" },
         QuantityKind.Percent => new[] { "%" },
         QuantityKind.Conductivity => new[] { "S/m" },
+        QuantityKind.Level => new[] { "dB" },
+        QuantityKind.Resistance => new[] { "ohm", "Ω" },
         _ => throw new ArgumentOutOfRangeException(nameof(kind)),
     };
 
@@ -49,6 +57,8 @@ public static class QuantityKinds
         QuantityKind.Angle => "5 deg",
         QuantityKind.Percent => "30 %",
         QuantityKind.Conductivity => "5.8e7 S/m",
+        QuantityKind.Level => "3 dB",
+        QuantityKind.Resistance => "50 ohm",
         _ => throw new ArgumentOutOfRangeException(nameof(kind)),
     };
 
@@ -94,6 +104,14 @@ public static class QuantityKinds
                 if (unit != "S/m") return false;
                 si = ElectricConductivity.From(number, ElectricConductivityUnit.SiemensPerMeter).SiemensPerMeter;
                 return true;
+            case QuantityKind.Level:
+                if (unit != "dB") return false;
+                si = number;
+                return true;
+            case QuantityKind.Resistance:
+                if (unit is not ("ohm" or "Ω")) return false;
+                si = number;
+                return true;
             default:
                 return false;
         }
@@ -110,6 +128,8 @@ public static class QuantityKinds
             QuantityKind.Angle => $"{F(si * 180.0 / Math.PI)} deg",
             QuantityKind.Percent => $"{F(si * 100.0)} %",
             QuantityKind.Conductivity => $"{si.ToString("0.###e0", CultureInfo.InvariantCulture)} S/m",
+            QuantityKind.Level => $"{F(si)} dB",
+            QuantityKind.Resistance => $"{F(si)} ohm",
             _ => throw new ArgumentOutOfRangeException(nameof(kind)),
         };
     }

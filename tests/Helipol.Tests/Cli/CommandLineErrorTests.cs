@@ -44,7 +44,7 @@ public class CommandLineErrorTests
         { "mismatch linear:3dB rhcp", "helipol mismatch: A: found 'linear:3dB', allowed linear or linear@TILTdeg (a linear antenna takes no axial ratio)" },
         // missing option values, repeated options
         { "schema -o", "helipol schema: --output: found no value, allowed file to write instead of stdout (e.g. designs/helipol.schema.json)" },
-        { "solve x.yaml --map", "helipol solve: --map: found no value, allowed PNG file to write the search's axial-ratio map to, as a heat map" },
+        { "solve x.yaml --map", "helipol solve: --map: found no value, allowed PNG file to write the search's objective map to, as a heat map" },
         { "analyze x.yaml --points", "helipol analyze: --points: found no value, allowed a whole number" },
         { "analyze x.yaml --elevation -10deg --freq", "helipol analyze: --freq: found no value, allowed one frequency, e.g. 5.8GHz" },
         { "build x.yaml -o", "helipol build: --output: found no value, allowed folder that receives one sub-folder per design" },

@@ -146,7 +146,7 @@ public class DesignVerbTests
         var table = plain.Split('\n').Skip(1).TakeWhile(l => !l.StartsWith("polarizer.", StringComparison.Ordinal)).ToList();
         Assert.All(table, l => Assert.True(l.Length <= 80, l));
         Assert.DoesNotContain("…", run.Out);
-        Assert.Contains("AR worst", run.Out);
+        Assert.Contains("window AR", run.Out);
     }
 
     // solve.sweep.points accepts 3 to 1001 (DesignKeys); the command-line override takes the same.

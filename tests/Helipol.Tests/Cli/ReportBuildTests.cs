@@ -23,7 +23,7 @@ public class ReportBuildTests
             Assert.Equal(File.ReadAllBytes(Path.Combine(a, "ridge-video-rx", name)), File.ReadAllBytes(Path.Combine(b, "ridge-video-rx", name)));
         var report = File.ReadAllText(Path.Combine(a, "ridge-video-rx", "report.md"));
         Assert.Contains("practice scaling", report);
-        Assert.Contains("![axial-ratio map](ar-map.png)", report);
+        Assert.Contains("![search objective map](ar-map.png)", report);
         using var json = System.Text.Json.JsonDocument.Parse(File.ReadAllBytes(Path.Combine(a, "ridge-video-rx", "design.json")));
         var solved = json.RootElement.GetProperty("solved");
         Assert.Equal(0.016002, solved.GetProperty("element_length_m").GetDouble(), 12);

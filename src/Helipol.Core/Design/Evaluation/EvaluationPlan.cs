@@ -17,9 +17,9 @@ public sealed record EvaluationPlan(IReadOnlyList<double> FrequenciesHz, Observa
     public static EvaluationPlan ForDesign(PolarizerDesign design, int? elementCount = null)
     {
         var s = design.Solve;
-        double span = elementCount is { } n ? 2 * Math.PI / n : 2 * Math.PI;
+        double period = elementCount is { } n ? 2 * Math.PI / n : 2 * Math.PI;
         return new EvaluationPlan(BandFrequencies(design.Band, s.FrequencyCount),
-            ObservationSet.Window(s.ElevationFromRad, s.ElevationToRad, s.ElevationStepRad, s.AzimuthStepRad, span),
+            ObservationSet.Coverage(s.ElevationFromRad, s.ElevationToRad, s.ElevationStepRad, s.AzimuthStepRad, s.AzimuthSpanRad, period),
             design.Polarizer.Sense, s.Objective, s.GainWeight);
     }
 
@@ -33,7 +33,7 @@ public sealed record EvaluationPlan(IReadOnlyList<double> FrequenciesHz, Observa
     {
         var s = design.Solve;
         return new EvaluationPlan(BandFrequencies(design.Band, Math.Min(3, s.FrequencyCount)),
-            ObservationSet.Window(s.ElevationFromRad, s.ElevationToRad, Math.Max(s.ElevationStepRad, SearchElevationStepRad), s.AzimuthStepRad, 2 * Math.PI / elementCount),
+            ObservationSet.Coverage(s.ElevationFromRad, s.ElevationToRad, Math.Max(s.ElevationStepRad, SearchElevationStepRad), s.AzimuthStepRad, s.AzimuthSpanRad, 2 * Math.PI / elementCount),
             design.Polarizer.Sense, s.Objective, s.GainWeight);
     }
 

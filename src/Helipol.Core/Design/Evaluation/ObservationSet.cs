@@ -33,6 +33,24 @@ public sealed class ObservationSet
         return new ObservationSet(list.ToArray());
     }
 
+    /// <summary>
+    /// A coverage window: elevations as in <see cref="Window"/>; azimuths over <paramref name="coverageSpanRad"/>
+    /// centred on azimuth 0, both ends included (a full turn when the span is 2π). With N identical,
+    /// evenly spaced elements a period of 2π/N covers every azimuth (<paramref name="periodRad"/>), so a
+    /// span at least that wide is sampled over one period only.
+    /// </summary>
+    public static ObservationSet Coverage(double fromRad, double toRad, double elevationStepRad, double azimuthStepRad, double coverageSpanRad, double periodRad = 2 * Math.PI)
+    {
+        if (coverageSpanRad >= Math.Min(periodRad, 2 * Math.PI) - 1e-12)
+            return Window(fromRad, toRad, elevationStepRad, azimuthStepRad, Math.Min(periodRad, 2 * Math.PI));
+        var rows = Window(fromRad, toRad, elevationStepRad, azimuthStepRad, azimuthStepRad).Directions.Select(d => d.ElevationRad).ToArray();
+        int steps = Math.Max(1, (int)Math.Ceiling(coverageSpanRad / azimuthStepRad - 1e-9));
+        var list = new List<Direction>();
+        foreach (var el in rows)
+            for (int j = 0; j <= steps; j++) list.Add(new Direction(el, -coverageSpanRad / 2 + coverageSpanRad * j / steps));
+        return new ObservationSet(list.ToArray());
+    }
+
     /// <summary>A cone at one elevation, the full turn of azimuth.</summary>
     public static ObservationSet Cone(double elevationRad, double azimuthStepRad) =>
         Window(elevationRad, elevationRad, 0, azimuthStepRad);

@@ -45,8 +45,8 @@ public static class PolarizerEvaluator
         return result;
     }
 
-    /// <summary>Summaries of every frequency for the wanted sense.</summary>
+    /// <summary>Summaries of every frequency for the wanted sense, realized gains against <paramref name="receiverOhm"/>.</summary>
     public static IReadOnlyList<FrequencySummary> Evaluate(PolarizerBuild build, IReadOnlyList<double> frequenciesHz, ObservationSet directions, Sense sense,
-        FieldSolveCounter? counter = null, int? maxParallelism = null) =>
-        Sample(build, frequenciesHz, directions, counter, maxParallelism).Select(s => s.Summarize(sense)).ToArray();
+        FieldSolveCounter? counter = null, int? maxParallelism = null, double receiverOhm = 50) =>
+        Sample(build, frequenciesHz, directions, counter, maxParallelism).Select(s => s.Summarize(sense, receiverOhm)).ToArray();
 }

@@ -3,13 +3,27 @@ using Helipol.Model;
 namespace Helipol.Design;
 
 /// <summary>One frequency of a sweep: the polarizer and, for comparison, the bare whip.</summary>
-public sealed record SweepPoint(FrequencySummary Polarizer, double BareWhipVswr50, double BareWhipGainDbic);
+public sealed record SweepPoint(FrequencySummary Polarizer, double BareWhipVswr50, double BareWhipGainDbic)
+{
+    /// <summary>The bare whip's realized gain in the wanted sense (mismatch to the receiver counted), dBic.</summary>
+    public double BareWhipRealizedGainDbic { get; init; } = double.NaN;
+
+    /// <summary>The bare whip's VSWR against the receiver impedance.</summary>
+    public double BareWhipVswr { get; init; } = double.NaN;
+}
 
 /// <summary>Gain in the right- and left-hand senses along one pattern cut, dBic, at angles in degrees.</summary>
-public sealed record PatternCut(string Name, double FrequencyHz, double[] AnglesDeg, double[] GainRhcpDbic, double[] GainLhcpDbic);
+public sealed record PatternCut(string Name, double FrequencyHz, double[] AnglesDeg, double[] GainRhcpDbic, double[] GainLhcpDbic)
+{
+    /// <summary>Mismatch to the receiver at this frequency, 10·log10(1 − |Γ|²) dB: realized gain = gain + this, in every direction.</summary>
+    public double MismatchDb { get; init; }
+
+    /// <summary>The receiver resistance <see cref="MismatchDb"/> refers to, Ω.</summary>
+    public double ReceiverOhm { get; init; } = 50;
+}
 
 /// <summary>
-/// A frequency sweep of a solved geometry and what is read from it: AR ≤ 3 dB bandwidth, the whip's
+/// A frequency sweep of a solved geometry and what is read from it: the bandwidth where the true axial ratio in the wanted sense stays within the limit, the whip's
 /// detuning by the polarizer, and two pattern cuts at the band centre.
 /// </summary>
 public sealed record SweepResult(
@@ -23,6 +37,9 @@ public sealed record SweepResult(
     PatternCut ElevationCut,
     long FieldSolves)
 {
+    /// <summary>Axial-ratio limit the bandwidth is read at, dB (<c>solve.axial_ratio_limit</c>).</summary>
+    public double LimitDb { get; init; } = 3;
+
     /// <summary>
     /// False when the lowest worst-AR point is the first or last of the sweep: the curve is still
     /// falling there, so the true minimum lies outside the swept range and <see cref="BestArDb"/> is only an edge value.
@@ -32,7 +49,7 @@ public sealed record SweepResult(
     /// <summary>True when the lowest point is the sweep's last (highest) frequency.</summary>
     public bool BestArAtTopEdge => Points.Count >= 2 && BestArFrequencyHz == Points[^1].Polarizer.FrequencyHz;
 
-    /// <summary>Width of the contiguous band around the best AR where the worst AR (wanted sense) is ≤ 3 dB, Hz; 0 when the best is above 3 dB.</summary>
+    /// <summary>Width of the contiguous band around the best AR where the worst true AR in the wanted sense is ≤ the limit, Hz; 0 when the best is above it.</summary>
     public double BandwidthHz => BandwidthHighHz - BandwidthLowHz;
 }
 
@@ -43,8 +60,6 @@ public sealed record SweepResult(
 /// </summary>
 public static class BandSweep
 {
-    public const double AxialRatioLimitDb = 3;
-
     public static SweepResult Run(PolarizerDesign design, PolarizerBuild build, double? elevationRad = null, int? points = null, double? fromHz = null, double? toHz = null, FieldSolveCounter? counter = null)
     {
         counter ??= new FieldSolveCounter();
@@ -57,16 +72,22 @@ public static class BandSweep
         double elevation = elevationRad ?? AnalysisCone.DefaultElevationRad(design.Whip.Kind);
         var cone = ObservationSet.Cone(elevation, design.Solve.AzimuthStepRad);
         var sense = design.Polarizer.Sense;
-        var pol = PolarizerEvaluator.Evaluate(build, freqs, cone, sense, counter);
+        double receiver = design.Solve.ReceiverOhm;
+        var pol = PolarizerEvaluator.Evaluate(build, freqs, cone, sense, counter, receiverOhm: receiver);
         var bare = PolarizerEvaluator.SampleBareWhip(design.Whip.Kind, design.Whip.LengthM, design.Whip.RadiusM, freqs, cone, counter, meshFrequencyHz: build.MeshFrequencyHz)
-            .Select(s => s.Summarize(sense)).ToArray();
-        var sweep = pol.Select((p, i) => new SweepPoint(p, bare[i].Vswr50, bare[i].GainDbic(sense))).ToArray();
+            .Select(s => s.Summarize(sense, receiver)).ToArray();
+        var sweep = pol.Select((p, i) => new SweepPoint(p, bare[i].Vswr50, bare[i].GainDbic(sense))
+            { BareWhipRealizedGainDbic = bare[i].RealizedGainDbic(sense), BareWhipVswr = bare[i].Vswr }).ToArray();
 
-        var worst = pol.Select(p => p.WorstScoreDb).ToArray();
-        int k = Array.IndexOf(worst, worst.Min());
-        var (bwLo, bwHi) = Bandwidth(freqs, worst, k, AxialRatioLimitDb);
+        // The best point is found on the search's score (continuous through the wrong sense); the
+        // axial ratio reported there, and the bandwidth, are the true wanted-sense axial ratio.
+        var score = pol.Select(p => p.WorstScoreDb).ToArray();
+        int k = Array.IndexOf(score, score.Min());
+        var worst = pol.Select(p => p.WorstWantedAxialRatioDb).ToArray();
+        double limit = design.Solve.AxialRatioLimitDb;
+        var (bwLo, bwHi) = Bandwidth(freqs, worst, k, limit);
         var (az, el) = Cuts(design, build, counter);
-        return new SweepResult(sweep, elevation, freqs[k], worst[k], bwLo, bwHi, az, el, counter.Count - before);
+        return new SweepResult(sweep, elevation, freqs[k], worst[k], bwLo, bwHi, az, el, counter.Count - before) { LimitDb = limit };
     }
 
     /// <summary>Edges where the curve crosses <paramref name="limit"/> on each side of sample k, by linear interpolation; (f_k, f_k) when sample k is above it.</summary>
@@ -103,6 +124,9 @@ public static class BandSweep
         var azL = s.GainLhcp.Take(72).Select(Db).ToArray();
         var elR = s.GainRhcp.Skip(72).Select(Db).ToArray();
         var elL = s.GainLhcp.Skip(72).Select(Db).ToArray();
-        return (new PatternCut("azimuth", design.Band.CenterHz, azAngles, azR, azL), new PatternCut("elevation", design.Band.CenterHz, elAngles, elR, elL));
+        double receiver = design.Solve.ReceiverOhm;
+        double mismatch = s.Summarize(design.Polarizer.Sense, receiver).MismatchDb;
+        return (new PatternCut("azimuth", design.Band.CenterHz, azAngles, azR, azL) { MismatchDb = mismatch, ReceiverOhm = receiver },
+            new PatternCut("elevation", design.Band.CenterHz, elAngles, elR, elL) { MismatchDb = mismatch, ReceiverOhm = receiver });
     }
 }

@@ -28,7 +28,7 @@ public static class TrimmingHint
         double offsetMHz = (bestArHz - centreHz) / 1e6;
         double change = -offsetMHz / mhzPerMmLength;
         string where = string.Create(inv, $"the model's best AR is at {bestArHz / 1e6:0.#} MHz, {Math.Abs(offsetMHz):0.#} MHz {(offsetMHz >= 0 ? "above" : "below")} the {centreHz / 1e6:0.#} MHz centre");
-        string slope = string.Create(inv, $"{mhzPerMmLength:+0.0;−0.0} MHz per mm of length");
+        string slope = $"{SignedNumber.Format(mhzPerMmLength, "0.0")} MHz per mm of length";
         if (Math.Abs(change) < finestTrimMm / 2)
             return new(change, string.Create(inv, $"no trimming needed: {where}; at {slope} that is a {Math.Abs(change):0.00} mm change, under half the {finestTrimMm:0.0#} mm step the length was solved to"),
                 string.Create(inv, $"none needed (best AR {bestArHz / 1e6:0.#} MHz, {Math.Abs(change):0.00} mm from the centre)"));
@@ -42,5 +42,24 @@ public static class TrimmingHint
             summary += "; beyond the length tolerance";
         }
         return new(change, text, summary);
+    }
+
+    /// <summary>The hint cut down to <paramref name="changeMm"/>, because the full step put part of the coverage window into the wrong sense.</summary>
+    public static TrimmingAdvice Limited(TrimmingAdvice full, double changeMm, string? flippedAt)
+    {
+        var inv = CultureInfo.InvariantCulture;
+        string why = flippedAt is null ? "the full step cannot be modelled" : $"the full step flips the sense at {flippedAt}, inside the coverage window";
+        string verb = changeMm < 0 ? string.Create(inv, $"trim {-changeMm:0.00} mm off every element") : string.Create(inv, $"cut the elements {changeMm:0.00} mm longer");
+        return new(changeMm, string.Create(inv, $"{verb}, not the full {Math.Abs(full.LengthChangeMm):0.00} mm: {why}"),
+            string.Create(inv, $"{(changeMm < 0 ? "trim" : "lengthen")} every element {Math.Abs(changeMm):0.00} mm (a larger change flips the sense)"));
+    }
+
+    /// <summary>No hint: every tried step toward the centre put part of the window into the wrong sense.</summary>
+    public static TrimmingAdvice Refused(TrimmingAdvice full, string? flippedAt)
+    {
+        var inv = CultureInfo.InvariantCulture;
+        string why = flippedAt is null ? "cannot be modelled" : $"flips the sense at {flippedAt}, inside the coverage window";
+        return new(0, string.Create(inv, $"no trimming: moving the best axial ratio toward the centre ({(full.LengthChangeMm < 0 ? "trimming" : "lengthening")} up to {Math.Abs(full.LengthChangeMm):0.00} mm) {why}; keep the solved length"),
+            "none: a change toward the centre would spoil the coverage window");
     }
 }

@@ -50,15 +50,31 @@ public static class SolvedJson
             j.WriteString("fitted_by", s.Calibration.FittedBy);
             j.WriteString("source", s.Calibration.Source);
             j.WriteEndObject();
-            Number(j, "objective_db", s.ObjectiveDb);
+            var verdict = VerdictJudge.For(design, s, tolerance);
+            j.WriteStartObject("verdict");
+            j.WriteString("grade", verdict.Grade.Word());
+            j.WriteStartArray("reasons");
+            foreach (var reason in verdict.Reasons) j.WriteStringValue(reason);
+            j.WriteEndArray();
+            j.WriteString("next_step", verdict.NextStep);
+            j.WriteString("figures", verdict.Figures);
+            Number(j, "axial_ratio_limit_db", design.Solve.AxialRatioLimitDb);
+            Number(j, "receiver_impedance_ohm", design.Solve.ReceiverOhm);
+            j.WriteEndObject();
+            // The search's score (axial ratio extended past linear into the wrong sense, less the weighted gain): not an axial ratio.
+            Number(j, "objective_score", s.ObjectiveDb);
+            // True worst axial ratio in the wanted sense over band and window; null where some direction has the wrong sense.
             Number(j, "worst_axial_ratio_db", s.WorstAxialRatioDb);
+            j.WriteBoolean("wrong_sense_in_window", s.Points.Any(p => !p.AllWantedSense));
             Number(j, "mean_gain_dbic", s.MeanGainDbic);
+            Number(j, "mean_realized_gain_dbic", s.MeanRealizedGainDbic);
             Points(j, "band", s.Points);
+            Points(j, "bare_whip_band", s.BareWhip);
 
             j.WriteStartObject("practice");
             j.WriteString("label", PracticeScaling.Label);
             Layout(j, s.Practice.Layout, s.Practice.Winding);
-            Number(j, "objective_db", s.Practice.ObjectiveDb);
+            Number(j, "objective_score", s.Practice.ObjectiveDb);
             if (s.Practice.Problem is { } problem) j.WriteString("problem", problem);
             Points(j, "band", s.Practice.Points);
             j.WriteEndObject();
@@ -81,6 +97,7 @@ public static class SolvedJson
                 Number(j, "best_axial_ratio_frequency_hz", sweep.BestArFrequencyHz);
                 Number(j, "best_axial_ratio_db", sweep.BestArDb);
                 j.WriteBoolean("best_axial_ratio_inside_sweep", sweep.BestArInsideSweep);
+                Number(j, "axial_ratio_limit_db", sweep.LimitDb);
                 Number(j, "axial_ratio_3db_low_hz", sweep.BandwidthLowHz);
                 Number(j, "axial_ratio_3db_high_hz", sweep.BandwidthHighHz);
                 Number(j, "axial_ratio_3db_bandwidth_hz", sweep.BandwidthHz);
@@ -91,6 +108,8 @@ public static class SolvedJson
                     Point(j, p.Polarizer);
                     Number(j, "bare_whip_vswr_50", p.BareWhipVswr50);
                     Number(j, "bare_whip_gain_dbic", p.BareWhipGainDbic);
+                    Number(j, "bare_whip_realized_gain_dbic", p.BareWhipRealizedGainDbic);
+                    Number(j, "bare_whip_vswr", p.BareWhipVswr);
                     j.WriteEndObject();
                 }
                 j.WriteEndArray();
@@ -102,6 +121,11 @@ public static class SolvedJson
                 j.WriteNumber("builds", tolerance.Builds);
                 j.WriteNumber("seed", tolerance.Seed);
                 Number(j, "yield", tolerance.Yield);
+                Number(j, "axial_ratio_limit_db", tolerance.LimitDb);
+                Number(j, "usable_yield", tolerance.UsableYield);
+                Number(j, "cut_tolerance_mm", tolerance.CutToleranceMm);
+                Number(j, "rise_tolerance_mm", tolerance.RiseToleranceMm);
+                j.WriteString("cut_tolerance", tolerance.CutText);
                 Number(j, "axial_ratio_db_p10", tolerance.ArP10Db);
                 Number(j, "axial_ratio_db_p50", tolerance.ArP50Db);
                 Number(j, "axial_ratio_db_p90", tolerance.ArP90Db);
@@ -151,13 +175,40 @@ public static class SolvedJson
         Value(j, p.ImpedanceOhm.Real);
         Value(j, p.ImpedanceOhm.Imaginary);
         j.WriteEndArray();
+        WritePoint(j, p);
+    }
+
+    /// <summary>
+    /// The fields of one frequency, shared with <c>analyze</c>: impedance and VSWR, realized gains
+    /// against the receiver impedance, and the true axial ratio with its sense. <c>axial_ratio_db</c> is
+    /// the deciding direction's (named in <c>worst_direction</c> with its own circular gains, from which it
+    /// follows); <c>axial_ratio_db_worst_wanted_sense</c> is null when some direction has the wrong sense.
+    /// </summary>
+    public static void WritePoint(Utf8JsonWriter j, FrequencySummary p)
+    {
         Number(j, "vswr_50", p.Vswr50);
-        Number(j, "axial_ratio_db_worst_wanted_sense", p.WorstScoreDb);
+        Number(j, "receiver_impedance_ohm", p.ReceiverOhm);
+        Number(j, "vswr", p.Vswr);
+        Number(j, "mismatch_db", p.MismatchDb);
+        Number(j, "axial_ratio_db", p.Worst.AxialRatioDb);
+        j.WriteString("axial_ratio_sense", SenseWord(p.Worst.Sense));
+        Number(j, "axial_ratio_db_worst_wanted_sense", p.WorstWantedAxialRatioDb);
+        Number(j, "wrong_sense_share", p.WrongSenseShare);
+        j.WriteStartObject("worst_direction");
+        Number(j, "elevation_deg", p.Worst.Direction.ElevationRad * 180 / Math.PI);
+        Number(j, "azimuth_deg", p.Worst.Direction.AzimuthRad * 180 / Math.PI);
+        Number(j, "gain_rhcp_dbic", p.Worst.GainRhcpDbic);
+        Number(j, "gain_lhcp_dbic", p.Worst.GainLhcpDbic);
+        Number(j, "axial_ratio_db", p.Worst.AxialRatioDb);
+        j.WriteString("sense", SenseWord(p.Worst.Sense));
+        j.WriteEndObject();
         Number(j, "axial_ratio_db_mean", p.MeanAxialRatioDb);
-        Number(j, "axial_ratio_db_max", p.WorstAxialRatioDb);
+        Number(j, "axial_ratio_db_max", p.MaxAxialRatioDb);
         j.WriteString("sense", SenseWord(p.Sense));
         Number(j, "gain_rhcp_dbic", p.GainRhcpDbic);
         Number(j, "gain_lhcp_dbic", p.GainLhcpDbic);
+        Number(j, "realized_gain_rhcp_dbic", p.RealizedGainRhcpDbic);
+        Number(j, "realized_gain_lhcp_dbic", p.RealizedGainLhcpDbic);
     }
 
     public static string SenseWord(Helipol.Engine.PolarizationSense s) => s switch

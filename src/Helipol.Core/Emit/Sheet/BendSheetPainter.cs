@@ -80,7 +80,7 @@ public static class BendSheetPainter
             pen.Line(m, y + 6, m + L, y + 6, 0.5);
             pen.Line(m, y + 2, m, y + 10, 0.3);
             pen.Line(m + L, y + 2, m + L, y + 10, 0.3);
-            pen.Text(string.Create(ci, $"L = {L:0.00} mm, tolerance ± {tol:0.00} mm"), m, y + 14, 2.6, grey: true);
+            pen.Text(string.Create(ci, $"L = {L:0.00} mm, {(i.ToleranceIsCutFigure ? "cut to within" : "tolerance")} ± {tol:0.00} mm"), m, y + 14, 2.6, grey: true);
         });
 
         // 2. Wrap template, one block per part; the section title rides with the first part.

@@ -18,7 +18,7 @@ public static class BuildTable
             ("Sense", F($"{SenseLabel(i.Sense)}, {(i.Winding == HelixWinding.Right ? "right-hand" : "left-hand")} winding")),
             ("Count", F($"{i.ElementCount} elements")),
             ("Spacing", F($"{360.0 / i.ElementCount:0.##}° = {g.ElementSpacingMm:0.00} mm between starts at the wire axis")),
-            ("Element length", F($"{i.ElementLengthMm:0.00} mm ± {i.LengthToleranceMm:0.00} mm")),
+            ("Element length", F($"{i.ElementLengthMm:0.00} mm, {(i.ToleranceIsCutFigure ? "cut to within" : "tolerance")} ± {i.LengthToleranceMm:0.00} mm")),
             ("Rise", F($"{i.ElementRiseMm:0.00} mm ± {i.RiseToleranceMm:0.00} mm, centred {i.CentreHeightMm:0.00} mm above the bottom")),
             ("Pitch angle", F($"{g.PitchAngleRad * deg:0.00}° from horizontal at the wire axis")),
             ("Arc angle", F($"{g.ArcAngleRad * deg:0.00}° round the former per element")),

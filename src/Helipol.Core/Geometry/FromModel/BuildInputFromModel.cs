@@ -16,8 +16,9 @@ public static class BuildInputFromModel
     /// <param name="winding">The winding chosen for the requested sense (never <see cref="Winding.Auto"/>).</param>
     /// <param name="summary">Lines for the build packet's summary page.</param>
     /// <param name="plotPngs">Plots for the packet, as PNG bytes.</param>
+    /// <param name="cutToleranceMm">Length and rise tolerance from the tolerance analysis ("cut to within ± x mm"); the design's spreads when not given.</param>
     public static PolarizerBuildInput Create(PolarizerDesign design, ElementLayout layout, Winding winding,
-        IReadOnlyList<SummaryLine>? summary = null, IReadOnlyList<byte[]>? plotPngs = null)
+        IReadOnlyList<SummaryLine>? summary = null, IReadOnlyList<byte[]>? plotPngs = null, (double LengthMm, double RiseMm)? cutToleranceMm = null)
     {
         ArgumentNullException.ThrowIfNull(design);
         ArgumentNullException.ThrowIfNull(layout);
@@ -55,8 +56,9 @@ public static class BuildInputFromModel
             PrintClearanceMm = f.PrintClearanceMm,
             Paper = f.Paper == Paper.Letter ? PaperSize.Letter : PaperSize.A4,
             Dpi = f.Dpi,
-            LengthToleranceMm = t.ElementLengthM * MmPerM,
-            RiseToleranceMm = t.ElementRiseM * MmPerM,
+            LengthToleranceMm = cutToleranceMm is { } c && double.IsFinite(c.LengthMm) && c.LengthMm > 0 ? c.LengthMm : t.ElementLengthM * MmPerM,
+            RiseToleranceMm = cutToleranceMm is { } r && double.IsFinite(r.RiseMm) && r.RiseMm > 0 ? r.RiseMm : t.ElementRiseM * MmPerM,
+            ToleranceIsCutFigure = cutToleranceMm is { } k && double.IsFinite(k.LengthMm) && k.LengthMm > 0,
             FrequencyHz = design.Band.CenterHz,
             SummaryLines = summary ?? [],
             PlotPngs = plotPngs ?? [],
