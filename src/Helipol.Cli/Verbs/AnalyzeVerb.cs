@@ -24,7 +24,7 @@ public static class AnalyzeVerb
 {
     public static Command Create(CliConsole console)
     {
-        var file = new Argument<string>("FILE") { Description = "design file (.yaml; auto lengths at practice scaling unless --solve) or a design.json written by build or solve (its solved geometry)" };
+        var file = new Argument<string>("FILE") { Description = "design file (.yaml) or a design.json written by build or solve; auto lengths at practice scaling unless --solve, a design.json at its solved geometry" };
         var solveFirst = new Option<bool>("--solve") { Description = "solve the design file first and evaluate the solution" };
         var freq = new Option<string>("--freq") { Description = "one frequency, e.g. 5.8GHz" };
         var from = new Option<string>("--from") { Description = "first frequency of a sweep" };

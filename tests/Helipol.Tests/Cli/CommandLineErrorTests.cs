@@ -56,7 +56,7 @@ public class CommandLineErrorTests
         { "new x", "helipol new: --center: found nothing, allowed centre frequency with its unit, e.g. 2.45GHz (required)" },
         // missing arguments
         { "sweep", "helipol sweep: FILE: found nothing, allowed design file (.yaml)" },
-        { "analyze --json", "helipol analyze: FILE: found nothing, allowed design file (.yaml)" },
+        { "analyze --json", "helipol analyze: FILE: found nothing, allowed design file (.yaml) or a design.json written by build or solve" },
         { "build", "helipol build: FILE: found nothing, allowed design files (.yaml)" },
         { "check", "helipol check: FILE: found nothing, allowed design files (.yaml)" },
         { "mismatch rhcp", "helipol mismatch: B: found nothing, allowed second antenna, same notation" },
