@@ -48,7 +48,7 @@ internal static class MeshBuilder
         var nodes = new List<Vector3>();
         var segments = new List<Segment>();
         for (int w = 0; w < model.Wires.Count; w++)
-            Segmentize(model.Wires[w], w, wavelength, options, ground, tol, nodes, segments);
+            Segmentize(EndCaps.Extended(model.Wires, w, ground, tol), w, wavelength, options, ground, tol, nodes, segments);
 
         var segArray = segments.ToArray();
         CheckClearances(segArray, ground, tol);
@@ -173,6 +173,11 @@ internal static class MeshBuilder
 
     private static void CheckClearances(Segment[] segs, bool ground, double tol)
     {
+        // Arc length along the segment list: a wire's segments are consecutive, so the wire between
+        // segments p < q of one wire is the segments p+1 … q−1. Segments shorter than the wire's
+        // diameter come closer than the sum of radii to their second neighbours without any crossing.
+        var along = new double[segs.Length + 1];
+        for (int s = 0; s < segs.Length; s++) along[s + 1] = along[s] + segs[s].LengthM;
         for (int p = 0; p < segs.Length; p++)
         {
             var sp = segs[p];
@@ -189,6 +194,7 @@ internal static class MeshBuilder
                 if (sp.StartNode == sq.StartNode || sp.StartNode == sq.EndNode || sp.EndNode == sq.StartNode || sp.EndNode == sq.EndNode)
                     continue;
                 if (Geometry3.DistanceLowerBound(sp, sq) >= sp.RadiusM + sq.RadiusM) continue;
+                if (sp.WireIndex == sq.WireIndex && along[q] - along[p + 1] < sp.RadiusM + sq.RadiusM) continue;
                 double d = Geometry3.SegmentDistance(sp.Start, sp.End, sq.Start, sq.End);
                 if (d < sp.RadiusM + sq.RadiusM)
                     throw new ModelException(F($"wires[{sp.WireIndex}] and wires[{sq.WireIndex}]: found surfaces touching or crossing near {sp.Centre} (axes {d * 1e3:0.###} mm apart), allowed at least the sum of radii ({(sp.RadiusM + sq.RadiusM) * 1e3:0.###} mm) unless joined at a shared point"), sp.WireIndex, sq.WireIndex);
