@@ -17,7 +17,10 @@ namespace Helipol.Engine.Kernel;
 ///
 /// Near pairs (closer than the longer segment) split g into the static 1/R part, integrated over v in
 /// closed form (asinh, <see cref="StaticLineIntegrals"/>), and the smooth remainder (e^{−jkR} − 1)/R,
-/// integrated by Gauss–Legendre; the outer integral uses end-clustered nodes. Farther pairs use plain
+/// integrated by Gauss–Legendre; the outer integral uses end-clustered nodes. Pairs on one tube
+/// (<see cref="UsesTubeKernel"/>) take the static part of the exact tube kernel instead
+/// (<see cref="ExactStaticKernel"/>), so that segments down to a radius or two stay accurate; the
+/// remainder, bounded and smooth, differs between the two kernels by O((ka)²) and stays reduced. Farther pairs use plain
 /// Gauss–Legendre whose order on each segment falls with its length over the distance (4, 3, then 2 points).
 /// Weights come from a few shared <see cref="QuadratureRule"/>s; per point only R is stored, which keeps
 /// the table small enough to stay in cache while a frequency is filled.
@@ -69,8 +72,8 @@ internal sealed class InteractionTable
         for (int p = 0; p < segs.Length; p++)
             for (int q = 0; q < segs.Length; q++)
             {
-                t.Add(segs, p, q, false, rule, true);
-                if (ground) t.Add(segs, p, q, true, rule, true);
+                t.Add(segs, p, q, false, rule, true, UsesTubeKernel(segs, p, q, false, Distance(segs, p, q, false)));
+                if (ground) t.Add(segs, p, q, true, rule, true, UsesTubeKernel(segs, p, q, true, Distance(segs, p, q, true)));
             }
         t.Freeze();
         return t;
@@ -96,10 +99,40 @@ internal sealed class InteractionTable
         double bound = Vector3.Distance(sp.Centre, qc) - 0.5 * (sp.LengthM + sq.LengthM);
         // Far beyond every threshold below: the exact distance cannot change the rule.
         double dmin = bound >= 3 * lmax ? bound : Geometry3.SegmentDistance(sp.Start, sp.End, q0, q1);
-        if (dmin < lmax)
-            Add(segs, p, q, image, RuleFor(dmin < 0.1 * lmax ? 12 : 8, 4, true), true);
+        bool tube = UsesTubeKernel(segs, p, q, image, dmin);
+        if (dmin < lmax || tube)
+            Add(segs, p, q, image, RuleFor(dmin < 0.1 * lmax ? 12 : 8, 4, true), true, tube);
         else
-            Add(segs, p, q, image, RuleFor(FarOrder(sp.LengthM, dmin), FarOrder(sq.LengthM, dmin), false), false);
+            Add(segs, p, q, image, RuleFor(FarOrder(sp.LengthM, dmin), FarOrder(sq.LengthM, dmin), false), false, false);
+    }
+
+    private static double Distance(Segment[] segs, int p, int q, bool image)
+    {
+        Segment sp = segs[p], sq = segs[q];
+        return image
+            ? Geometry3.SegmentDistance(sp.Start, sp.End, sq.Start.MirroredInGround, sq.End.MirroredInGround)
+            : Geometry3.SegmentDistance(sp.Start, sp.End, sq.Start, sq.End);
+    }
+
+    /// <summary>How far, in radii, the tube kernel is used along one wire. Beyond it the two kernels'
+    /// static parts differ by about a²/(2z³) (their expansions in a/z: 0.8 % of 1/z at 8 radii), and the
+    /// tail beyond adds ∫ a²/(2z³) dz = 1/256 to a potential of order 2 ln(L/a): under 0.1 %.</summary>
+    internal const double TubeReachInRadii = 8;
+
+    /// <summary>
+    /// Whether a pair takes the exact tube kernel's static part (<see cref="ExactStaticKernel"/>): the
+    /// two segments lie on one tube, i.e. on the same wire or meeting at a node, and within
+    /// <see cref="TubeReachInRadii"/> radii; an image only where its wire stands on the ground (the
+    /// image continues the same tube; either segment touching it keeps the table reciprocal). Other pairs are separate wires, where the observation point on
+    /// one axis sees the other tube at sqrt(ρ² + a²) to second order in a/ρ: the reduced kernel.
+    /// </summary>
+    internal static bool UsesTubeKernel(Segment[] segs, int p, int q, bool image, double dmin)
+    {
+        Segment sp = segs[p], sq = segs[q];
+        if (dmin >= TubeReachInRadii * Math.Max(sp.RadiusM, sq.RadiusM)) return false;
+        bool touching = sp.StartNode == sq.StartNode || sp.StartNode == sq.EndNode || sp.EndNode == sq.StartNode || sp.EndNode == sq.EndNode;
+        if (image) return sp.WireIndex == sq.WireIndex && (sp.Start.Z == 0 || sp.End.Z == 0 || sq.Start.Z == 0 || sq.End.Z == 0);
+        return sp.WireIndex == sq.WireIndex || touching;
     }
 
     /// <summary>
@@ -111,7 +144,7 @@ internal sealed class InteractionTable
     internal static int FarOrder(double lengthM, double distanceM) =>
         distanceM >= 3 * lengthM ? 2 : distanceM >= 1.5 * lengthM ? 3 : 4;
 
-    private void Add(Segment[] segs, int p, int q, bool image, int ruleIndex, bool subtract)
+    private void Add(Segment[] segs, int p, int q, bool image, int ruleIndex, bool subtract, bool tube)
     {
         var rule = _rules[ruleIndex];
         Segment sp = segs[p], sq = segs[q];
@@ -134,7 +167,7 @@ internal sealed class InteractionTable
             Vector3 r = sp.PointAt(u);
             if (subtract)
             {
-                var (c0, c1) = StaticLineIntegrals.Over(r, q0, tq, lq, a2);
+                var (c0, c1) = tube ? ExactStaticKernel.Over(r, q0, tq, lq, a2) : StaticLineIntegrals.Over(r, q0, tq, lq, a2);
                 s00 += wi * c0; s10 += wi * u * c0; s01 += wi * c1; s11 += wi * u * c1;
             }
             for (int j = 0; j < innerNodes.Length; j++)

@@ -18,6 +18,7 @@ internal static class EndCaps
     public static Wire Extended(IReadOnlyList<Wire> wires, int w, bool ground, double tol)
     {
         var wire = wires[w];
+        if (wire.Ends == WireEnds.Open) return wire;
         var pts = wire.PointsM;
         bool first = IsFree(wires, w, 0, ground, tol), last = IsFree(wires, w, pts.Count - 1, ground, tol);
         if (!first && !last) return wire;

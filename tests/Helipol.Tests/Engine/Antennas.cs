@@ -9,11 +9,12 @@ internal static class Antennas
     public const double OneMetreWavelengthHz = PhysicalConstants.SpeedOfLight;
 
     /// <summary>Centre-fed straight dipole along z, a vertex at the feed so a node sits there.</summary>
-    public static WireModel Dipole(double lengthM, double radiusM, Conductor? conductor = null, System.Numerics.Complex? volts = null) =>
+    public static WireModel Dipole(double lengthM, double radiusM, Conductor? conductor = null, System.Numerics.Complex? volts = null,
+        WireEnds ends = WireEnds.Flat) =>
         new(new[]
             {
                 new Wire(new Vector3[] { new(0, 0, -lengthM / 2), new(0, 0, 0), new(0, 0, lengthM / 2) }, radiusM,
-                    conductor ?? PerfectConductor.Instance),
+                    conductor ?? PerfectConductor.Instance, null, ends),
             },
             GroundPlane.None,
             new[] { new VoltageSource(new Vector3(0, 0, 0), volts ?? 1) });

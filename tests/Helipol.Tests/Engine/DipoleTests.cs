@@ -36,11 +36,12 @@ public class DipoleTests
     // transcribed, not re-checked against the book). That
     // figure comes from an approximate current and a different feed model; input reactance of a thick
     // dipole depends strongly on the feed-gap model (tens of ohms between models), resistance much less.
-    // We check R within 10 % and that X is inductive and within 25 Ω.
+    // We check R within 10 % and that X is inductive and within 25 Ω. The book's wire is an open tube
+    // (current zero at the end, no cap), so the engine's wire is too.
     [Fact]
     public void HalfWaveAtRadiusFiveThousandthsWavelengthMatchesBalanis()
     {
-        var z = Antennas.Solve(Antennas.Dipole(0.5, 0.005)).InputImpedanceOhm();
+        var z = Antennas.Solve(Antennas.Dipole(0.5, 0.005, ends: WireEnds.Open)).InputImpedanceOhm();
         Assert.InRange(z.Real, 85.8 * 0.90, 85.8 * 1.10);
         Assert.InRange(z.Imaginary, 54.9 - 25, 54.9 + 25);
     }
@@ -48,13 +49,15 @@ public class DipoleTests
     // King, Tables of Antenna Characteristics (1971), a/λ = 0.00635 (values as transcribed, not
     // re-checked against the book). These are thick wires (length ≈ 75 radii) where the reduced thin-wire kernel is at the
     // edge of its validity and King's feed model differs from a delta gap: we allow 8 % in R and 6 Ω in X.
+    // King's tubes carry no charge on their ends (current zero at the open end), so neither does the
+    // engine's wire here: with flat caps the dipole is electrically a radius longer and R reads 8-13 % high.
     [Theory]
     [InlineData(0.4456, 58.86, -24.77)]
     [InlineData(0.4775, 75.35, 8.68)]
     [InlineData(0.5093, 96.47, 43.82)]
     public void ThickDipoleMatchesKingsTables(double length, double r, double x)
     {
-        var z = Antennas.Solve(Antennas.Dipole(length, 0.00635)).InputImpedanceOhm();
+        var z = Antennas.Solve(Antennas.Dipole(length, 0.00635, ends: WireEnds.Open)).InputImpedanceOhm();
         Assert.InRange(z.Real, r * 0.92, r * 1.08);
         Assert.InRange(z.Imaginary, x - 6, x + 6);
     }

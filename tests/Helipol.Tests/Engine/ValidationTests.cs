@@ -3,7 +3,7 @@ using Helipol.Engine;
 
 namespace Helipol.Tests.Engine;
 
-// Refusals before any solve (thin-wire validity: segment longer than about 4 radii, wires apart by more
+// Refusals before any solve (thin-wire validity: segment longer than about 2 radii with the tube kernel, wires apart by more
 // than their radii — Harrington, Field Computation by Moment Methods, §4; common practice, no source
 // for the exact thresholds).
 public class ValidationTests
@@ -24,9 +24,10 @@ public class ValidationTests
     public void RefusesNaNCoordinates() =>
         Assert.Contains("points[1]", Refusal(With(Good with { PointsM = new Vector3[] { new(0, 0, -0.25), new(0, double.NaN, 0), new(0, 0, 0.25) } })));
 
+    // The last edge is 1 mm of 1 mm-radius wire, 1.5 mm with its end cap (a/2): under two radii.
     [Fact]
-    public void RefusesEdgeShorterThanFourRadii() =>
-        Assert.Contains("4 wire radii", Refusal(With(Good with { PointsM = new Vector3[] { new(0, 0, -0.25), new(0, 0, 0), new(0, 0, 0.003) } })));
+    public void RefusesEdgeShorterThanTwoRadii() =>
+        Assert.Contains("2 wire radii", Refusal(With(Good with { PointsM = new Vector3[] { new(0, 0, -0.25), new(0, 0, 0), new(0, 0, 0.001) } })));
 
     [Fact]
     public void RefusesCrossingWires()

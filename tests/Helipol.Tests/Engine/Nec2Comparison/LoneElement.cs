@@ -19,16 +19,16 @@ internal static class LoneElement
 {
     private static readonly CultureInfo Inv = CultureInfo.InvariantCulture;
 
-    public static WireModel Wire(double lengthM, double radiusM, IReadOnlyList<VoltageSource> sources) =>
+    public static WireModel Wire(double lengthM, double radiusM, IReadOnlyList<VoltageSource> sources, WireEnds ends = WireEnds.Flat) =>
         // A vertex at the centre, so that a node (where the current is read) sits there.
-        new([new Helipol.Engine.Wire([new Vector3(0, 0, -lengthM / 2), new Vector3(0, 0, 0), new Vector3(0, 0, lengthM / 2)], radiusM, PerfectConductor.Instance)],
+        new([new Helipol.Engine.Wire([new Vector3(0, 0, -lengthM / 2), new Vector3(0, 0, 0), new Vector3(0, 0, lengthM / 2)], radiusM, PerfectConductor.Instance, null, ends)],
             GroundPlane.None, sources);
 
     /// <summary>The wire meshed for <paramref name="maxFrequencyHz"/> with the uniform-field sources on every interior node.</summary>
-    public static (MeshedModel Mesh, int Centre) Mesh(double lengthM, double radiusM, double maxFrequencyHz, SegmentationOptions? options = null)
+    public static (MeshedModel Mesh, int Centre) Mesh(double lengthM, double radiusM, double maxFrequencyHz, SegmentationOptions? options = null, WireEnds ends = WireEnds.Flat)
     {
         // A first mesh tells where the nodes fall (a dummy source at the centre), the second carries the field.
-        var probe = MeshedModel.Create(Wire(lengthM, radiusM, [new VoltageSource(new Vector3(0, 0, 0), 1)]), maxFrequencyHz, options);
+        var probe = MeshedModel.Create(Wire(lengthM, radiusM, [new VoltageSource(new Vector3(0, 0, 0), 1)], ends), maxFrequencyHz, options);
         var segs = probe.Segments;
         var sources = new List<VoltageSource>();
         int centre = -1;
@@ -38,13 +38,14 @@ internal static class LoneElement
             if (Math.Abs(node.Z) < 1e-3 * radiusM) centre = sources.Count;
             sources.Add(new VoltageSource(node, 0.5 * (segs[s].LengthM + segs[s + 1].LengthM)));
         }
-        return (MeshedModel.Create(Wire(lengthM, radiusM, sources), maxFrequencyHz, options), centre);
+        return (MeshedModel.Create(Wire(lengthM, radiusM, sources, ends), maxFrequencyHz, options), centre);
     }
 
     /// <summary>The engine's resonance: golden-section search of |I(centre)| between the bounds.</summary>
-    public static double EngineResonanceHz(double lengthM, double radiusM, double loHz, double hiHz, SegmentationOptions? options = null)
+    public static double EngineResonanceHz(double lengthM, double radiusM, double loHz, double hiHz, SegmentationOptions? options = null,
+        WireEnds ends = WireEnds.Flat)
     {
-        var (mesh, centre) = Mesh(lengthM, radiusM, hiHz, options);
+        var (mesh, centre) = Mesh(lengthM, radiusM, hiHz, options, ends);
         double Current(double f) => MomSolver.Solve(mesh, f).InputCurrentA(centre).Magnitude;
         return GoldenMaximum(Current, loHz, hiHz, 1e4);
     }
