@@ -22,6 +22,8 @@ public sealed class MeshedModel
         UnknownCount = r.BasisCount;
         SourceBases = r.SourceBases;
         SourceVolts = r.SourceVolts;
+        SourceGapBases = r.SourceGapBases;
+        SourceGapWeights = r.SourceGapWeights;
         LoadBases = r.LoadBases;
         LoadImpedances = r.LoadImpedances;
         HasGround = model.Ground == GroundPlane.PerfectAtZ0;
@@ -61,6 +63,19 @@ public sealed class MeshedModel
     internal int[] PieceStart { get; }
     internal int[] SourceBases { get; }
     internal Complex[] SourceVolts { get; }
+    /// <summary>Per source, the bases its gap drives and their V_m/V (Mesh/FeedGap.cs).</summary>
+    internal int[][] SourceGapBases { get; }
+    internal double[][] SourceGapWeights { get; }
+
+    /// <summary>Current into source <paramref name="i"/>'s gap, Σ (V_m/V) I_m.</summary>
+    internal Complex GapCurrent(int i, Complex[] basisCurrents)
+    {
+        Complex sum = 0;
+        var b = SourceGapBases[i];
+        var w = SourceGapWeights[i];
+        for (int k = 0; k < b.Length; k++) sum += w[k] * basisCurrents[b[k]];
+        return sum;
+    }
     internal int[] LoadBases { get; }
     internal Complex[] LoadImpedances { get; }
     internal InteractionTable Table { get; }

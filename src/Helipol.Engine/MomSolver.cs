@@ -42,7 +42,9 @@ public static class MomSolver
         var z = _matrix;
         FillMatrix(mesh, frequencyHz, z, useReferenceFill);
         var rhs = new Complex[n];
-        for (int i = 0; i < mesh.SourceBases.Length; i++) rhs[mesh.SourceBases[i]] += mesh.SourceVolts[i];
+        for (int i = 0; i < mesh.SourceBases.Length; i++)
+            for (int k = 0; k < mesh.SourceGapBases[i].Length; k++)
+                rhs[mesh.SourceGapBases[i][k]] += mesh.SourceGapWeights[i][k] * mesh.SourceVolts[i];
         var currents = new Complex[n];
         solver.Solve(z, n, rhs, currents);
         foreach (var c in currents)

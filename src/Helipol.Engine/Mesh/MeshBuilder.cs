@@ -18,6 +18,8 @@ internal static class MeshBuilder
         int BasisCount,
         int[] SourceBases,
         Complex[] SourceVolts,
+        int[][] SourceGapBases,
+        double[][] SourceGapWeights,
         int[] LoadBases,
         Complex[] LoadImpedances);
 
@@ -63,6 +65,8 @@ internal static class MeshBuilder
             var s = model.Sources[i];
             if (s is null || !s.AtM.IsFinite || !double.IsFinite(s.Volts.Real) || !double.IsFinite(s.Volts.Imaginary))
                 throw new ModelException(F($"sources[{i}]: found a missing or non-finite position or voltage, allowed finite values"));
+            if (s.GapM is { } gap && !(double.IsFinite(gap) && gap >= 0))
+                throw new ModelException(F($"sources[{i}].gap: found {gap} m, allowed a finite width ≥ 0 (0: a delta gap)"));
             sourceBases[i] = BasisAt(s.AtM, $"sources[{i}]", segArray, nodes, nodeBases);
             if (Array.IndexOf(sourceBases, sourceBases[i], 0, i) >= 0)
                 throw new ModelException(F($"sources[{i}]: found a second source on the node at {nodes[NodeOfBasis(pieces, segArray, sourceBases[i])]}, allowed one source per node"));
@@ -83,7 +87,11 @@ internal static class MeshBuilder
             loadZ[i] = l.ImpedanceOhm;
         }
 
-        return new Result(segArray, nodes.ToArray(), pieces, basisCount, sourceBases, volts, loadBases, loadZ);
+        var gapBases = new int[sourceBases.Length][];
+        var gapWeights = new double[sourceBases.Length][];
+        for (int i = 0; i < sourceBases.Length; i++)
+            (gapBases[i], gapWeights[i]) = FeedGap.Spread(sourceBases[i], pieces, segArray, model.Sources[i].GapM ?? FeedGap.DefaultGapM(sourceBases[i], pieces, segArray));
+        return new Result(segArray, nodes.ToArray(), pieces, basisCount, sourceBases, volts, gapBases, gapWeights, loadBases, loadZ);
     }
 
     private static void CheckWire(Wire wire, int w, bool ground)

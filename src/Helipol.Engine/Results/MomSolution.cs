@@ -39,7 +39,7 @@ public sealed class MomSolution
         double omega = 2 * Math.PI * frequencyHz;
         double input = 0;
         for (int i = 0; i < mesh.SourceBases.Length; i++)
-            input += 0.5 * (mesh.SourceVolts[i] * Complex.Conjugate(basisCurrents[mesh.SourceBases[i]])).Real;
+            input += 0.5 * (mesh.SourceVolts[i] * Complex.Conjugate(mesh.GapCurrent(i, basisCurrents))).Real;
         InputPowerW = input;
         double loss = 0;
         for (int s = 0; s < segs.Length; s++)
@@ -66,7 +66,11 @@ public sealed class MomSolution
     public int SourceCount => _mesh.SourceBases.Length;
 
     /// <summary>Current through source <paramref name="sourceIndex"/> in its reference direction, A.</summary>
-    public Complex InputCurrentA(int sourceIndex = 0) => _basisCurrents[SourceBasis(sourceIndex)];
+    public Complex InputCurrentA(int sourceIndex = 0)
+    {
+        SourceBasis(sourceIndex);
+        return _mesh.GapCurrent(sourceIndex, _basisCurrents);
+    }
 
     /// <summary>
     /// Input impedance V/I at source <paramref name="sourceIndex"/>, Ω. With several sources this is

@@ -36,7 +36,7 @@ internal static class LoneElement
         {
             var node = segs[s].End;
             if (Math.Abs(node.Z) < 1e-3 * radiusM) centre = sources.Count;
-            sources.Add(new VoltageSource(node, 0.5 * (segs[s].LengthM + segs[s + 1].LengthM)));
+            sources.Add(new VoltageSource(node, 0.5 * (segs[s].LengthM + segs[s + 1].LengthM), GapM: 0));
         }
         return (MeshedModel.Create(Wire(lengthM, radiusM, sources, ends), maxFrequencyHz, options), centre);
     }
