@@ -66,14 +66,17 @@ public class PolarizerPhysicsTests
     }
 
     // Narrow: tenths of a millimetre of element length matter (common practice, no source; the
-    // builders quote ±0.02 in). 0.3 mm moves the worst AR by more than half a dB.
+    // builders quote ±0.02 in). 0.3 mm moves the worst AR by more than half a dB on the slope below the
+    // best length. With the engine's end caps the elements are electrically a wire diameter longer and
+    // the best length (flat, so insensitive) moved from above 21 mm to about 20.8 mm: the nominal is
+    // taken on the slope, 20.2 mm (worst AR 8.38, 7.63, 6.85 dB at 20.0, 20.2, 20.5 mm).
     [Fact]
     public void TenthsOfAMillimetreOfLengthMatter()
     {
         double Worst(double l) => PolarizerEvaluator.Evaluate(Bare(3, l, 12.7, Winding.Left), new[] { 5.8e9 }, Horizon, Sense.Rhcp)[0].WorstScoreDb;
-        double nominal = Worst(20.5);
-        Assert.True(Math.Abs(Worst(20.8) - nominal) > 0.5);
-        Assert.True(Math.Abs(Worst(20.2) - nominal) > 0.5);
+        double nominal = Worst(20.2);
+        Assert.True(Math.Abs(Worst(20.5) - nominal) > 0.5);
+        Assert.True(Math.Abs(Worst(19.9) - nominal) > 0.5);
     }
 
     // Soundness: Maxwell's equations in free space have no length scale; with perfect conductors and
