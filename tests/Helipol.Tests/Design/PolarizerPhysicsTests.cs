@@ -67,7 +67,7 @@ public class PolarizerPhysicsTests
 
     // Narrow: tenths of a millimetre of element length matter (common practice, no source; the
     // builders quote ±0.02 in). 0.3 mm moves the worst AR by more than half a dB on the slope below the
-    // best length. With the engine's end caps the elements are electrically a wire diameter longer and
+    // best length. With the engine's end caps the elements are electrically a radius longer (a/2 at each end) and
     // the best length (flat, so insensitive) moved from above 21 mm to about 20.8 mm: the nominal is
     // taken on the slope, 20.2 mm (worst AR 8.38, 7.63, 6.85 dB at 20.0, 20.2, 20.5 mm).
     [Fact]
