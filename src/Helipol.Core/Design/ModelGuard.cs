@@ -6,10 +6,11 @@ namespace Helipol.Design;
 
 /// <summary>
 /// Refuses, before any field solve, a pinned geometry the thin-wire model cannot trust or a
-/// builder cannot make: segments shorter than about four wire radii, wires that touch or cross,
+/// builder cannot make: segments shorter than about two wire radii, wires that touch or cross,
 /// elements inside the cover, a search range with no buildable former. The engine's mesh checks
-/// (Harrington, Field Computation by Moment Methods, ch. 4: thin-wire kernel valid for segment
-/// length ≫ radius) run on the mesh alone, so nothing is solved to find the fault.
+/// (Harrington, Field Computation by Moment Methods, ch. 4: the reduced thin-wire kernel wants segments
+/// ≫ radius; the engine's tube kernel on each wire's own pairs relaxes that to two radii) run on the
+/// mesh alone, so nothing is solved to find the fault.
 /// </summary>
 public static class ModelGuard
 {
@@ -39,7 +40,7 @@ public static class ModelGuard
         catch (ModelException ex)
         {
             return (MeshKey(design, ex.WireIndices), $"a geometry the thin-wire model refuses ({ex.Message})",
-                "wires that keep clear of each other with segments of at least four radii");
+                "wires that keep clear of each other with segments of at least two radii");
         }
         return null;
     }

@@ -50,7 +50,7 @@ internal static class MeshBuilder
         var nodes = new List<Vector3>();
         var segments = new List<Segment>();
         for (int w = 0; w < model.Wires.Count; w++)
-            Segmentize(EndCaps.Extended(model.Wires, w, ground, tol), w, wavelength, options, ground, tol, nodes, segments);
+            Segmentize(EndCaps.Extended(model.Wires, w, ground, tol), model.Wires[w], w, wavelength, options, ground, tol, nodes, segments);
 
         var segArray = segments.ToArray();
         CheckClearances(segArray, ground, tol);
@@ -132,7 +132,7 @@ internal static class MeshBuilder
         }
     }
 
-    private static void Segmentize(Wire wire, int w, double wavelength, SegmentationOptions o, bool ground, double tol,
+    private static void Segmentize(Wire wire, Wire given, int w, double wavelength, SegmentationOptions o, bool ground, double tol,
         List<Vector3> nodes, List<Segment> segments)
     {
         var pts = wire.PointsM;
@@ -152,7 +152,11 @@ internal static class MeshBuilder
             n = Math.Max(n, 1);
             if (len / n < shortest) n = (int)Math.Floor(len / shortest);
             if (n < 1)
-                throw new ModelException(F($"wires[{w}].points[{i}]: found an edge {len * 1e3:0.###} mm long, allowed at least {o.MinimumLengthInRadii} wire radii ({shortest * 1e3:0.###} mm) for the thin-wire model"), w);
+            {
+                double own = Vector3.Distance(given.PointsM[i - 1], given.PointsM[i]);
+                string caps = Math.Abs(own - len) > tol ? F($" ({own * 1e3:0.###} mm and its end cap allowance of half a radius per free end)") : "";
+                throw new ModelException(F($"wires[{w}].points[{i}]: found an edge {len * 1e3:0.###} mm long{caps}, allowed at least {o.MinimumLengthInRadii} wire radii ({shortest * 1e3:0.###} mm) for the thin-wire model"), w);
+            }
             if (len / n > wavelength / 10 * 1.000001 && n * 1.0 < len / target)
                 throw new ModelException(F($"wires[{w}]: found radius {wire.RadiusM * 1e3:0.###} mm, too thick for the thin-wire model at this frequency (segments would be {len / n / wavelength:0.###} λ long, allowed ≤ 0.1 λ with length ≥ {o.MinimumLengthInRadii} radii)"), w);
             int prev = NodeIndex(a, nodes, tol);

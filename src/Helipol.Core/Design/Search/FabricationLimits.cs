@@ -36,6 +36,10 @@ public sealed record FabricationLimits(double FormerHeightM, double WireDiameter
         double d = WireDiameterM;
         FabricationViolation V(FabricationCause cause, string reason) => new(cause, reason);
         if (layout.RiseM <= 0) return V(FabricationCause.Rise, "rise must be positive");
+        // A search step can propose a length below the rise (or below zero), where the helix's arc
+        // sqrt(L² − h²) is not a number and every comparison below would pass; the engine's old
+        // 4-radius segment limit used to refuse such elements before this check was needed.
+        if (!(layout.LengthM > layout.RiseM)) return V(FabricationCause.Length, "element not longer than its rise");
         // The bore already clears the whip's cover; a wall thinner than the wire would put the
         // elements inside the cover (or the whip).
         if ((layout.OuterDiameterM - BoreM) / 2 <= d) return V(FabricationCause.Wire, "former wall thinner than the wire (elements would sit inside the cover)");
