@@ -20,7 +20,7 @@ public static class SweepVersusNec2
     private static readonly CultureInfo Inv = CultureInfo.InvariantCulture;
     private const string Nec2c = "/usr/bin/nec2c";
 
-    public static void Run(int runs = 3)
+    public static void Run(int runs = 5)
     {
         const double f0 = 5.6e9, f1 = 6.0e9;
         var freqs = Enumerable.Range(0, 201).Select(i => f0 + (f1 - f0) * i / 200).ToArray();
@@ -64,7 +64,7 @@ public static class SweepVersusNec2
         Console.WriteLine(string.Create(Inv, $"| nec2c, same segments, FR 201 + RP 72 | {Median(nec):0.000} | {nec.Min():0.000} |"));
         var least = parts.OrderBy(p => p.Create + p.Sweep + p.Cut).First();
         Console.WriteLine(string.Create(Inv, $"engine's fastest run by step: mesh and tables {least.Create:0.000} s, 201 fills and solves {least.Sweep:0.000} s, 72-point cuts {least.Cut:0.000} s"));
-        Console.WriteLine(string.Create(Inv, $"ratio engine / nec2c (medians): {Median(engine) / Median(nec):0.00} (goal ≤ 0.5)"));
+        Console.WriteLine(string.Create(Inv, $"ratio engine / nec2c: medians {Median(engine) / Median(nec):0.00}, minima {engine.Min() / nec.Min():0.00} (goal ≤ 0.5; the minima are the least disturbed by other work, load average now {LoadAverage()})"));
     }
 
     /// <summary>
@@ -114,6 +114,13 @@ public static class SweepVersusNec2
             return sw.Elapsed.TotalSeconds;
         }
         finally { dir.Delete(true); }
+    }
+
+    private static string LoadAverage()
+    {
+        try { return File.ReadAllText("/proc/loadavg").Split(' ')[0]; }
+        catch (IOException) { return "unknown"; }
+        catch (UnauthorizedAccessException) { return "unknown"; }
     }
 
     private static double Median(List<double> v)
