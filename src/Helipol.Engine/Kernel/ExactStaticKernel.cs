@@ -4,12 +4,13 @@ namespace Helipol.Engine.Kernel;
 /// The static part of the exact cylindrical (tube) kernel over a straight source segment. With the
 /// current spread evenly round a tube of radius a and the field tested on the same tube, two points
 /// at axial offset z and angle φ apart are R = sqrt(z² + 4a² sin²(φ/2)) apart, and the kernel is the
-/// average of 1/R over φ (Pocklington's equation with the exact kernel: Werner, "An exact integration
-/// procedure for vector potentials of thin circular loop antennas", IEEE Trans. AP 44, 1996, and the
-/// survey of Fikioris and Wu, "On the application of numerical methods to Hallén's equation", IEEE
-/// Trans. AP 49, 2001, where the reduced kernel R = sqrt(z² + a²) is shown to have no solution as
-/// segments shrink below the radius). Its logarithmic singularity at z = 0 makes the Galerkin system
-/// well posed at any segment length, which the reduced kernel's smooth peak does not.
+/// average of 1/R over φ (the exact kernel of Pocklington's and Hallén's equations; the references here
+/// are from memory: Fikioris and Wu, "On the application of numerical methods to Hallén's equation",
+/// IEEE Trans. AP 49, 2001, on why the reduced kernel R = sqrt(z² + a²) has no solution as segments
+/// shrink below the radius, and Werner, IEEE Trans. AP 44, 1996, on integrating the exact kernel).
+/// Its logarithmic singularity at z = 0 makes the Galerkin system well posed at any segment length,
+/// which the reduced kernel's smooth peak does not. The figures in Nec2Comparison/LoneElementTests
+/// (an open tube converging as segments shrink to a fifth of the radius) check it here.
 ///
 /// Here the axial integral over the source segment is done in closed form for each φ (the asinh form of
 /// <see cref="StaticLineIntegrals"/> with radius² = 4a² sin²(φ/2)), and the φ average by
