@@ -6,7 +6,7 @@ namespace Helipol.Design.Loading;
 /// a grounded circle at the grid's outer radius.
 ///
 /// <para>Method. Cell-centred finite volumes (Patankar, "Numerical Heat Transfer and Fluid Flow",
-/// 1980, ch. 4): the map is sampled 4 × 4 times over each face's strip (below). The Dirichlet faces at the wire
+/// 1980, ch. 4): the map is sampled 16 × 2 times (along × across the flux) over each face's strip (below). The Dirichlet faces at the wire
 /// and at the outer circle sit half a cell from the centres. The symmetric M-matrix is solved by
 /// conjugate gradients (Hestenes and Stiefel, J. Res. NBS 49(6), 1952) preconditioned by
 /// <see cref="IncompleteCholesky"/>. The charge per unit length is the Gauss flux through the
@@ -20,7 +20,7 @@ public static class CapacitanceSolve
     /// settles to far better than the grid's own error).</summary>
     public const double Tolerance = 1e-9;
 
-    private const int Samples = 4;
+    private const int Along = 16, Across = 2;
 
     /// <summary>C′/ε0 of the wire in <paramref name="map"/> on <paramref name="grid"/>.</summary>
     public static double RelativeCapacitance(LogPolarGrid grid, IPermittivityMap map)
@@ -35,32 +35,32 @@ public static class CapacitanceSolve
         double StripRadial(int i, int j, double from, double to)
         {
             double inv = 0;
-            for (int si = 0; si < Samples; si++)
+            for (int si = 0; si < Along; si++)
             {
-                double fi = from + (to - from) * (si + 0.5) / Samples, row = 0;
-                for (int sj = 0; sj < Samples; sj++)
+                double fi = from + (to - from) * (si + 0.5) / Along, row = 0;
+                for (int sj = 0; sj < Across; sj++)
                 {
-                    var (x, y) = grid.Point(i, j, fi, (sj + 0.5) / Samples);
+                    var (x, y) = grid.Point(i, j, fi, (sj + 0.5) / Across);
                     row += map.At(x, y);
                 }
-                inv += Samples / row;
+                inv += Across / row;
             }
-            return Samples / inv;
+            return Along / inv;
         }
         double StripAngular(int i, int j)
         {
             double inv = 0;
-            for (int sj = 0; sj < Samples; sj++)
+            for (int sj = 0; sj < Along; sj++)
             {
-                double fj = 0.5 + (sj + 0.5) / Samples, col = 0;
-                for (int si = 0; si < Samples; si++)
+                double fj = 0.5 + (sj + 0.5) / Along, col = 0;
+                for (int si = 0; si < Across; si++)
                 {
-                    var (x, y) = grid.Point(i, j, (si + 0.5) / Samples, fj);
+                    var (x, y) = grid.Point(i, j, (si + 0.5) / Across, fj);
                     col += map.At(x, y);
                 }
-                inv += Samples / col;
+                inv += Across / col;
             }
-            return Samples / inv;
+            return Along / inv;
         }
 
         double radial = grid.DeltaTheta / grid.DeltaU, angular = grid.DeltaU / grid.DeltaTheta;

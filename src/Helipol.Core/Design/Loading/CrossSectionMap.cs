@@ -46,6 +46,8 @@ public sealed class CrossSectionMap : IPermittivityMap
 
     public double At(double x, double y)
     {
+        // Above everything (wire, glue, wrap and the former's surface): air, without the distance work.
+        if (y > _c + _s.WrapThicknessM && y > _surfaceY + _s.WrapThicknessM) return 1;
         double dFormer = DistanceToFormer(x, y);
         if (dFormer == 0) return _s.FormerPermittivity;
         if (_s.GlueThicknessM > 0)
