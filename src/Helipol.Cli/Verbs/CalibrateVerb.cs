@@ -29,6 +29,21 @@ public static class CalibrateVerb
         var command = new Command("calibrate", "Fit the dielectric-loading factor of a material set to measurements of a build.") { file, bestAt, s1p, bareS1p, spin, contrast, output, force };
         command.SetAction(parse =>
         {
+            // What was measured is checked before the design is read: without a measurement there is nothing to fit.
+            string? s1pPath = parse.GetValue(s1p), barePath = parse.GetValue(bareS1p), spinPath = parse.GetValue(spin);
+            double? contrastDb = parse.GetValue(contrast);
+            bool dataFit = s1pPath is not null || spinPath is not null || contrastDb is not null;
+            bool bestGiven = parse.GetValue(bestAt) is not null;
+            if (bestGiven == dataFit)
+            {
+                console.Error.WriteLine("helipol calibrate: found " + (dataFit ? "--best-at beside other measurements" : "no measurement") + ", allowed either --best-at or any of --s1p, --spin, --contrast");
+                return ExitCodes.BadInput;
+            }
+            if (barePath is not null && s1pPath is null)
+            {
+                console.Error.WriteLine("helipol calibrate: --bare-s1p: found it without --s1p, allowed it only beside --s1p (the change between the two sweeps is fitted)");
+                return ExitCodes.BadInput;
+            }
             var designs = DesignLoader.LoadAll(new[] { parse.GetValue(file)! }, console);
             if (designs is null) return ExitCodes.BadInput;
             var design = designs[0];
@@ -41,19 +56,6 @@ public static class CalibrateVerb
                     console.Error.WriteLine($"helipol calibrate: {problem}");
                     return ExitCodes.BadInput;
                 }
-            }
-            string? s1pPath = parse.GetValue(s1p), barePath = parse.GetValue(bareS1p), spinPath = parse.GetValue(spin);
-            double? contrastDb = parse.GetValue(contrast);
-            bool dataFit = s1pPath is not null || spinPath is not null || contrastDb is not null;
-            if (measured is null == !dataFit || (measured is not null && dataFit))
-            {
-                console.Error.WriteLine("helipol calibrate: found " + (dataFit ? "--best-at with measurement files" : "no measurement") + ", allowed either --best-at or any of --s1p, --spin, --contrast");
-                return ExitCodes.BadInput;
-            }
-            if (barePath is not null && s1pPath is null)
-            {
-                console.Error.WriteLine("helipol calibrate: --bare-s1p: found it without --s1p, allowed it only beside --s1p (the change between the two sweeps is fitted)");
-                return ExitCodes.BadInput;
             }
             Measurements? data = null;
             var hashes = new List<(string File, string Sha256)>();
