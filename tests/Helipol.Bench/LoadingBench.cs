@@ -31,7 +31,7 @@ public static class LoadingBench
         cold.Sort();
         cached.Sort();
         var grid = new LogPolarGrid(section.WireRadiusM, AddedInductance.DefaultAngularCells);
-        Console.WriteLine(string.Create(Inv, $"Element loading, cross-section field solve ({grid.RadialCells} × {grid.AngularCells} cells, two solves): cold {cold[runs / 2]:0.0} ms (min {cold[0]:0.0}), cached {cached[runs / 2]:0.00} µs per look-up (median of {runs})"));
+        Console.WriteLine(string.Create(Inv, $"Element loading, cross-section field solve ({grid.RadialCells} × {grid.AngularCells} cells; the vacuum solve is shared): cold {cold[runs / 2]:0.0} ms (min {cold[0]:0.0}), cached {cached[runs / 2]:0.00} µs per look-up (median of {runs})"));
         Console.WriteLine();
     }
 }
