@@ -21,6 +21,17 @@ public class EffectiveCoatingTests
         Assert.Equal(factor * AddedInductance.HPerM(s.Section), s.AddedInductanceHPerM, 15);
     }
 
+    // The tolerance analysis's scaled wrap: at a multiple of 10 % it is the solved section itself,
+    // between multiples within 1 % of solving the scaled section directly (S grows smoothly with thickness).
+    [Fact]
+    public void AScaledWrapIsInterpolatedCloseToItsOwnSolve()
+    {
+        var s = new Surroundings(Loading.CrossSectionSolveTests.TapeHug, 1);
+        var direct = AddedInductance.ShapeFactor(s.Section with { WrapThicknessM = s.Section.WrapThicknessM * 1.15 });
+        Assert.InRange(s.WithWrapScaled(1.15).ShapeFactor / direct, 0.99, 1.01);
+        Assert.Equal(AddedInductance.ShapeFactor(s.Section with { WrapThicknessM = s.Section.WrapThicknessM * 0.8 }), s.WithWrapScaled(0.8).ShapeFactor, 9);
+    }
+
     [Fact]
     public void AirAroundTheWireIsNoCoating()
     {

@@ -20,7 +20,7 @@ public static class EffectiveCoating
     /// <summary>The equivalent single sleeve, or null when the wire sits in air.</summary>
     public static DielectricCoating? For(Surroundings s)
     {
-        double sum = AddedInductance.ShapeFactor(s.Section);
+        double sum = s.ShapeFactor;
         if (sum <= 1e-9 || s.CalibrationFactor <= 0) return null;
         double a = s.Section.WireRadiusM;
         double ln = Math.Max(Math.Log(2), sum / 0.8);
