@@ -17,6 +17,7 @@ public static class Program
     public static int Main(string[] args)
     {
         if (args.Length > 0 && args[0] == "sweep") { SweepVersusNec2.Run(); return 0; }
+        if (args.Length > 0 && args[0] == "loading") { LoadingBench.Run(); return 0; }
         int repetitions = args.Length > 0 ? int.Parse(args[0], Inv) : 301;
         Console.WriteLine("helipol bench: thin-wire MoM engine");
         Console.WriteLine(string.Create(Inv, $"processors: {Environment.ProcessorCount}, SIMD width: {System.Numerics.Vector<double>.Count} doubles, repetitions: {repetitions}, load average before: {LoadAverage()}"));
@@ -26,6 +27,7 @@ public static class Program
         FillScaling();
         SweepParallelism();
         SweepVersusNec2.Run();
+        LoadingBench.Run();
         DesignBench.Run();
         return 0;
     }

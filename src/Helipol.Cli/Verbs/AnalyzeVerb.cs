@@ -213,6 +213,7 @@ public static class AnalyzeVerb
             j.WriteNumber("elements", build.ElementCount);
             j.WriteNumber("outer_diameter_mm", build.OuterDiameterM * 1e3);
             j.WriteNumber("calibration_factor", build.Surroundings.CalibrationFactor);
+            SolvedJson.WriteLoading(j, Helipol.Design.Loading.LoadingSummary.For(build.Surroundings, build.ElementLengthM));
             // Keys left auto in the file and evaluated at practice scaling: never a solved result.
             j.WriteStartArray("practice_scaled_keys");
             foreach (var k in practiceKeys) j.WriteStringValue(k);

@@ -54,7 +54,7 @@ public sealed record PolarizerBuild(
             Uniform(count, lengthM, riseM), p.Wire.RadiusM,
             p.Wire.IsPerfectConductor ? null : p.Wire.ConductivitySPerM!.Value,
             p.Wire.RelativePermeability.Value,
-            Surroundings.From(p, calibrationFactor))
+            Surroundings.From(design, calibrationFactor))
         {
             MeshFrequencyHz = MeshDensity.FrequencyHz(design),
         };

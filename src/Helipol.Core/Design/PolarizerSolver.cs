@@ -26,6 +26,7 @@ public static class PolarizerSolver
             plan.ObjectiveOf(points, p.Sense), points, Practice(design, plan, calibration.Factor, counter), search, counter.Count)
         {
             BareWhip = bare,
+            Loading = Loading.LoadingSummary.For(build.Surroundings, search.ElementLengthM),
             LengthPinned = p.ElementLengthM is not null,
             RisePinned = p.ElementRiseM is not null,
             CountPinned = p.ElementCount is not null,

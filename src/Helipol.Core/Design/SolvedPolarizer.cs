@@ -20,6 +20,9 @@ public sealed record SolvedPolarizer(
     SearchOutcome Search,
     long FieldSolves)
 {
+    /// <summary>The element loading of the solved build (added inductance, layer shares, shortening); null when not worked out.</summary>
+    public Helipol.Design.Loading.LoadingSummary? Loading { get; init; }
+
     /// <summary>The bare whip at the same frequencies and directions as <see cref="Points"/>, for the verdict's comparison.</summary>
     public IReadOnlyList<FrequencySummary> BareWhip { get; init; } = Array.Empty<FrequencySummary>();
 

@@ -107,6 +107,7 @@ public static class DesignJson
             Sourced(json, "layer_thickness_m", wrap.LayerThicknessM);
             json.WriteNumber("layers", wrap.Layers);
             json.WriteNumber("total_thickness_m", wrap.TotalThicknessM);
+            if (wrap.TentDistanceM is { } tent) json.WriteNumber("tent_m", tent); else json.WriteNull("tent_m");
             Sourced(json, "relative_permittivity", wrap.RelativePermittivity);
             Sourced(json, "loss_tangent", wrap.LossTangent);
             json.WriteEndObject();

@@ -83,7 +83,7 @@ public static class DesignResolver
             var tape = MaterialTable.Wrap(doc.Choice("polarizer.wrap.material"));
             wrap = new Wrap(tape, Override(doc, "polarizer.wrap.thickness", tape.TypicalThicknessM!), doc.Integer("polarizer.wrap.layers"),
                 Override(doc, "polarizer.wrap.permittivity", tape.RelativePermittivity),
-                Override(doc, "polarizer.wrap.loss_tangent", tape.LossTangent));
+                Override(doc, "polarizer.wrap.loss_tangent", tape.LossTangent)) { TentDistanceM = doc.Si("polarizer.wrap.tent") };
         }
 
         Glue? glue = null;

@@ -50,6 +50,9 @@ public sealed record Former(DielectricMaterial Material, double? OuterDiameterM,
 public sealed record Wrap(DielectricMaterial Material, SourcedValue LayerThicknessM, int Layers, SourcedValue RelativePermittivity, SourcedValue LossTangent)
 {
     public double TotalThicknessM => LayerThicknessM.Value * Layers;
+
+    /// <summary>Distance from the wire axis where the tape meets the former; null = hugging the wire's side.</summary>
+    public double? TentDistanceM { get; init; }
 }
 
 public sealed record Glue(DielectricMaterial Material, double ThicknessM, SourcedValue RelativePermittivity, SourcedValue LossTangent);

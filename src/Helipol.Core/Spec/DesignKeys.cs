@@ -61,6 +61,7 @@ public static class DesignKeys
         F("material", new ChoiceField(WrapMaterials), "tape wound over the elements to hold them") with { Default = "pvc-tape" },
         F("thickness", Length(0.005, 5), "thickness of one layer of tape") with { DefaultRule = "the material's typical thickness" },
         F("layers", new IntegerField(1, 10), "number of layers") with { Default = "1" },
+        F("tent", Length(0.01, 50), "distance from the wire axis where the tape comes down onto the former beside the wire (air under the tent)") with { DefaultRule = "hugging: the tape follows the wire's side down to the former" },
         F("permittivity", new NumberField(1, 20, "a relative permittivity"), "overrides the table's relative permittivity") with { DefaultRule = "from the material table" },
         F("loss_tangent", new NumberField(0, 1, "a loss tangent"), "overrides the table's loss tangent") with { DefaultRule = "from the material table" });
 

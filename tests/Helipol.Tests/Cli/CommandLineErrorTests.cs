@@ -52,7 +52,7 @@ public class CommandLineErrorTests
         { "calibrate x.yaml --best-at", "helipol calibrate: --best-at: found no value, allowed frequency where the build measured its best axial ratio, e.g. 5.65GHz" },
         { "sweep x.yaml --points 5 --points 6", "helipol sweep: --points: found 2 values ('5', '6'), allowed one value" },
         // missing required options
-        { "calibrate x.yaml", "helipol calibrate: --best-at: found nothing, allowed frequency where the build measured its best axial ratio, e.g. 5.65GHz (required)" },
+        { "calibrate x.yaml", "helipol calibrate: found no measurement, allowed either --best-at or any of --s1p, --spin, --contrast" },
         { "new x", "helipol new: --center: found nothing, allowed centre frequency with its unit, e.g. 2.45GHz (required)" },
         // missing arguments
         { "sweep", "helipol sweep: FILE: found nothing, allowed design file (.yaml)" },

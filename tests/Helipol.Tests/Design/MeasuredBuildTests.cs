@@ -1,5 +1,6 @@
 using Helipol.Design;
 using Helipol.Model;
+using Xunit.Abstractions;
 
 namespace Helipol.Tests.Design;
 
@@ -8,10 +9,11 @@ namespace Helipol.Tests.Design;
 /// whip received by a circularly polarized antenna; a 3-element foam-and-tape build at the practice
 /// dimensions (about 16 mm elements, 12.7 mm rise, one PVC tape wrap) gave 1.6 dB more than the bare
 /// whip, and the opposite winding 7-8 dB less than the right one. The design file is
-/// data/designs/practice-foam-tape.yaml. The default calibration was fitted to the 7-8 dB (and
-/// only to that); the gain over the bare whip is a separate prediction.
+/// data/designs/practice-foam-tape.yaml. The model's default loading (factor 1, the field solve)
+/// does not reproduce the account; these tests hold the report's comparison row
+/// (<see cref="CoatingCalibration.DefaultComparison"/>) to what the model says.
 /// </summary>
-public class MeasuredBuildTests
+public class MeasuredBuildTests(ITestOutputHelper output)
 {
     private static readonly PolarizerDesign Practice = DesignFiles.Load("practice-foam-tape");
     private static readonly ObservationSet Horizon = ObservationSet.Cone(0, 5 * Math.PI / 180);
@@ -26,31 +28,34 @@ public class MeasuredBuildTests
         return (right, wrong, bare.GainRhcpDbic);
     }
 
+    // The disagreement the report states: at factor 1 the contrast falls well short of the account's 7-8 dB.
     [Fact]
-    public void DefaultCalibrationReproducesTheWindingContrastItWasFittedTo()
+    public void FieldSolvedLoadingFallsShortOfTheAccountsWindingContrast()
     {
-        var (right, wrong, _) = Gains(CoatingCalibration.DefaultFactor);
-        Assert.InRange(right - wrong, 7.0, 8.0);
-        // And the constant is what the stated fit gives (7.5 dB, smallest factor).
-        Assert.InRange(CalibrationFit.FitCoCrossRatio(Practice, 7.5, 5.8e9), CoatingCalibration.DefaultFactor - 0.15, CoatingCalibration.DefaultFactor + 0.15);
+        var (right, wrong, bare) = Gains(CoatingCalibration.DefaultFactor);
+        output.WriteLine($"factor 1: contrast {right - wrong:0.0} dB, over bare {right - bare:0.0} dB");
+        Assert.True(right - wrong < 7.0, $"contrast {right - wrong:0.0} dB");
+        Assert.Contains($"predicts {right - wrong:0.0} dB and {SignedNumber.Format(right - bare, "0.0")} dB", CoatingCalibration.DefaultComparison);
     }
 
-    // Prediction not used in the fit: the right winding beats the bare whip into a CP receiver.
-    // Measured +1.6 dB; the model says about +2.7 dB. We accept the neighbourhood ±1.5 dB and report
-    // the difference (README, "The solver").
+    // Not fitted to anything: the right winding beats the bare whip into a CP receiver. Measured
+    // +1.6 dB; we accept the neighbourhood ±1.5 dB (the field model's gain, not its contrast, is the
+    // part of the account it does reproduce).
     [Fact]
-    public void CalibratedModelPredictsAGainOverTheBareWhipNearTheMeasuredOne()
+    public void FieldSolvedLoadingPredictsAGainOverTheBareWhipNearTheMeasuredOne()
     {
         var (right, _, bare) = Gains(CoatingCalibration.DefaultFactor);
         Assert.InRange(right - bare, 1.6 - 1.5, 1.6 + 1.5);
     }
 
-    // The published coated-wire model alone (factor 1) explains much less: the practice length sits
-    // far below the free-space optimum near 0.4 λ (about 20-21 mm), so the contrast is small.
+    // The factor the account would need (7.5 dB, smallest factor) is the one the report quotes.
     [Fact]
-    public void UncalibratedModelPredictsAWeakerEffectAtSixteenMillimetres()
+    public void TheAccountNeedsTheFactorTheReportQuotes()
     {
-        var (right, wrong, _) = Gains(1);
-        Assert.True(right - wrong < 3, $"uncalibrated contrast {right - wrong:0.0} dB");
+        double fit = CalibrationFit.FitCoCrossRatio(Practice, 7.5, 5.8e9);
+        output.WriteLine($"factor for 7.5 dB: {fit:0.00}");
+        Assert.InRange(fit, CoatingCalibration.PracticeAccountFactor - 0.15, CoatingCalibration.PracticeAccountFactor + 0.15);
+        var (right, wrong, _) = Gains(CoatingCalibration.PracticeAccountFactor);
+        Assert.InRange(right - wrong, 7.0, 8.0);
     }
 }

@@ -15,7 +15,7 @@ public class PolarizerPhysicsTests
 
     /// <summary>Lossless, dielectric-free build (the published model with nothing to calibrate).</summary>
     private static PolarizerBuild Bare(int count, double lengthMm, double riseMm, Winding winding) =>
-        PolarizerBuild.From(Practice, count, lengthMm * 1e-3, riseMm * 1e-3, 28e-3, winding, 1) with { Surroundings = Surroundings.None, WireConductivitySPerM = null };
+        PolarizerBuild.From(Practice, count, lengthMm * 1e-3, riseMm * 1e-3, 28e-3, winding, 1) with { Surroundings = Surroundings.None(0.4e-3), WireConductivitySPerM = null };
 
     // Elements that descend to the right, seen from outside, give RHCP (common practice, no source).
     // Seen from outside, growing azimuth runs to the viewer's right, so "descending to the right" is

@@ -12,7 +12,8 @@ namespace Helipol.Design;
 public static class CalibrationFile
 {
     /// <summary>The keys a calibration file may hold, in the order <see cref="Write"/> writes them.</summary>
-    public static readonly IReadOnlyList<string> Keys = new[] { "material_set", "loading_factor", "fitted_by", "design", "source" };
+    public static readonly IReadOnlyList<string> Keys = new[] { "material_set", "loading_factor", "fitted_by", "design", "source",
+        "added_inductance_h_per_m", "residual", "factor_low", "factor_high", "data" };
 
     /// <param name="shownAs">the path as the design wrote it (kept in the result's source line)</param>
     /// <param name="shownInErrors">the path error lines start with, so a user can open it from where helipol ran</param>
@@ -47,17 +48,30 @@ public static class CalibrationFile
     }
 
     /// <summary>The file text: comments say what the number means; no timestamp, so the same fit gives the same bytes.</summary>
-    public static string Write(CoatingCalibration c)
+    public static string Write(CoatingCalibration c, MeasurementFitResult? fit = null, IReadOnlyList<(string File, string Sha256)>? data = null)
     {
         var s = new StringBuilder();
         s.Append("# helipol calibration: a factor on the added inductance of the dielectric around the elements\n");
-        s.Append("# (effective-coating model, Design/Wires/EffectiveCoating.cs). Reference it from a design with\n");
+        s.Append("# (field-solved cross-section, Design/Loading). Reference it from a design with\n");
         s.Append("# `calibration: <path to this file>`.\n");
         s.Append("material_set: ").Append(Quote(c.MaterialSet)).Append('\n');
         s.Append("loading_factor: ").Append(c.Factor.ToString("0.####", CultureInfo.InvariantCulture)).Append('\n');
         s.Append("fitted_by: ").Append(Quote(c.FittedBy)).Append('\n');
         if (c.FromDesign is { } d) s.Append("design: ").Append(Quote(d)).Append('\n');
         s.Append("source: ").Append(Quote(c.Source)).Append('\n');
+        if (fit is not null)
+        {
+            // What the fit means for this design's elements, how well it fits, and how far it is pinned down.
+            s.Append("added_inductance_h_per_m: ").Append(fit.AddedInductanceHPerM.ToString("0.####e0", CultureInfo.InvariantCulture)).Append('\n');
+            s.Append("residual: ").Append(fit.Residual.ToString("0.#####", CultureInfo.InvariantCulture)).Append('\n');
+            s.Append("factor_low: ").Append(fit.FactorLow.ToString("0.####", CultureInfo.InvariantCulture)).Append('\n');
+            s.Append("factor_high: ").Append(fit.FactorHigh.ToString("0.####", CultureInfo.InvariantCulture)).Append('\n');
+        }
+        if (data is { Count: > 0 })
+        {
+            s.Append("data:\n");
+            foreach (var (file, sha) in data) s.Append("  - { file: ").Append(Quote(file)).Append(", sha256: ").Append(Quote(sha)).Append(" }\n");
+        }
         return s.ToString();
     }
 

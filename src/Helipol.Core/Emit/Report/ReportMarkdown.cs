@@ -56,7 +56,8 @@ public static class ReportMarkdown
             L($"**At a search limit:** {string.Join("; ", s.Search.LimitsReached)}. The objective may keep improving beyond it: widen that range (or change the limit) in the design file and solve again.");
         }
         L($"");
-        L($"Dielectric around the elements (former contact, glue, wrap) enters as an effective coating (Richmond and Newman's coated-wire inductance, partial coverage by mixing, see Design/Wires/EffectiveCoating.cs) with {s.Calibration.DescribeFor(design.Polarizer)}: {s.Calibration.Source}; {s.Calibration.FittedBy}.");
+        L($"Dielectric around the elements (former contact, glue, wrap) enters as an added series inductance per unit length from a 2-D field solve of the element's cross-section (Design/Loading), handed to the engine as the equivalent coated wire of Richmond and Newman with {s.Calibration.DescribeFor(design.Polarizer)}: {s.Calibration.Source}; {s.Calibration.FittedBy}.");
+        if (s.Loading is { } loading) L($"{LoadingLine(loading)}");
         L($"");
         L($"## Band");
         L($"");
@@ -109,7 +110,7 @@ public static class ReportMarkdown
         L($"## Practice scaling beside the solution");
         L($"");
         L($"Practice scaling is the builders' 5.8 GHz rule (about 16 mm elements, 12.7 mm rise, common practice, no source) scaled by wavelength, with pinned values kept. It is {SignedNumber.Format((s.Practice.Layout.LengthM - s.Layout.LengthM) * 1e3, "0.00")} mm in length and {SignedNumber.Format((s.Practice.Layout.RiseM - s.Layout.RiseM) * 1e3, "0.00")} mm in rise from the solution; its worst axial ratio in the same window is {Worst(s.Practice.Points, s.Sense, s.Practice.ObjectiveDb is null)}.");
-        L($"The rule was stated for one build (foam, PVC tape, 5.8 GHz); the field model includes this design's own whip, former diameter, wire and wrap, so the two differ wherever those differ, and the model's dielectric loading rests on one calibration (factor {s.Calibration.Factor:0.###}).");
+        L($"The rule was stated for one build (foam, PVC tape, 5.8 GHz); the field model includes this design's own whip, former diameter, wire and wrap, so the two differ wherever those differ, and the model's dielectric loading is the field solve times a factor of {s.Calibration.Factor:0.###}.");
         if (s.Practice.Problem is { } problem) L($"The practice layout could not be modelled: {problem}");
         if (s.Calibration.Factor == CoatingCalibration.DefaultFactor)
         {
@@ -118,6 +119,10 @@ public static class ReportMarkdown
         }
         return r.ToString();
     }
+
+    /// <summary>The loading in one paragraph: the added inductance, each layer's share, the shortening against a bare element.</summary>
+    public static string LoadingLine(Helipol.Design.Loading.LoadingSummary l) => FormattableString.Invariant(
+        $"Element loading: {l.AddedHPerM * 1e9:0.#} nH/m added ({l.PhysicsHPerM * 1e9:0.#} nH/m from the field solve × factor {l.Factor:0.###}); of the layers taken one at a time, the wrap gives {100 * l.WrapShare:0} %, the glue {100 * l.GlueShare:0} % and the former {100 * l.FormerShare:0} %. A straight element of the solved length resonates {l.ShorteningPercent:0.0} % lower than the same wire bare, so it is cut about that much shorter than a bare element would be.");
 
     private static bool RuleAgrees(SolvedPolarizer s) => PracticeScaling.WindingFor(s.Sense) == s.Winding;
 

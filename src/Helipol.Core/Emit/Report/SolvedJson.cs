@@ -50,6 +50,7 @@ public static class SolvedJson
             j.WriteString("fitted_by", s.Calibration.FittedBy);
             j.WriteString("source", s.Calibration.Source);
             j.WriteEndObject();
+            if (s.Loading is { } loading) WriteLoading(j, loading);
             var verdict = VerdictJudge.For(design, s, tolerance);
             j.WriteStartObject("verdict");
             j.WriteString("grade", verdict.Grade.Word());
@@ -228,5 +229,21 @@ public static class SolvedJson
     {
         if (double.IsFinite(v)) j.WriteNumberValue(v);
         else j.WriteNullValue();
+    }
+
+    /// <summary>The element loading: added inductance after the factor, the factor, the physics figure, layer shares, shortening.</summary>
+    public static void WriteLoading(Utf8JsonWriter j, Helipol.Design.Loading.LoadingSummary l)
+    {
+        j.WriteStartObject("loading");
+        Number(j, "added_inductance_h_per_m", l.AddedHPerM);
+        Number(j, "factor", l.Factor);
+        Number(j, "physics_added_inductance_h_per_m", l.PhysicsHPerM);
+        j.WriteStartObject("layer_share");
+        Number(j, "wrap", l.WrapShare);
+        Number(j, "glue", l.GlueShare);
+        Number(j, "former", l.FormerShare);
+        j.WriteEndObject();
+        Number(j, "shortening_percent", l.ShorteningPercent);
+        j.WriteEndObject();
     }
 }

@@ -33,7 +33,8 @@ internal static class Nec2Deck
     /// <param name="segmentsPerWavelength">NEC segment density at <paramref name="frequencyHz"/>.</param>
     /// <param name="minimumLengthInRadii">Shortest NEC segment allowed, in wire radii (fewer segments rather than shorter ones).</param>
     public static string Write(WireModel model, double frequencyHz, IEnumerable<Nec2Cut> cuts,
-        double segmentsPerWavelength = 20, double minimumLengthInRadii = 2, string title = "helipol engine comparison")
+        double segmentsPerWavelength = 20, double minimumLengthInRadii = 2, string title = "helipol engine comparison",
+        double laterWiresInductanceHPerM = 0)
     {
         bool ground = model.Ground == GroundPlane.PerfectAtZ0;
         double target = PhysicalConstants.SpeedOfLight / frequencyHz / segmentsPerWavelength;
@@ -41,9 +42,10 @@ internal static class Nec2Deck
         sb.Append("CM ").Append(title).Append('\n').Append("CE\n");
         var sources = new (int Tag, int Segment)?[model.Sources.Count];
         var loads = new List<string>();
-        int tag = 0;
+        int tag = 0, wireIndex = -1;
         foreach (var wire in model.Wires)
         {
+            wireIndex++;
             if (wire.Coating is not null) throw new NotSupportedException("NEC-2 has no dielectric coating model");
             foreach (var (a, b) in StraightRuns(wire.PointsM))
             {
@@ -68,6 +70,10 @@ internal static class Nec2Deck
                     sources[s] = (tag, feedSegment == -1 ? n : feedSegment.Value);
                 }
                 sb.Append(Inv, $"GW {tag} {n} {Mm(a.X)} {Mm(a.Y)} {Mm(a.Z)} {Mm(b.X)} {Mm(b.Y)} {Mm(b.Z)} {Mm(wire.RadiusM)}\n");
+                // A distributed series inductance on every wire after the first (LD 2: series R, L, C
+                // per unit length; C = 0 leaves the capacitor out, NEC-2 user's guide, part III, LD card).
+                if (wireIndex > 0 && laterWiresInductanceHPerM > 0)
+                    loads.Add(string.Create(Inv, $"LD 2 {tag} 0 0 0 {laterWiresInductanceHPerM:R} 0\n"));
                 if (wire.Conductor is LossyConductor metal)
                 {
                     // NEC-2's LD 5 knows only σ (μr = 1). The skin-effect surface impedance depends on

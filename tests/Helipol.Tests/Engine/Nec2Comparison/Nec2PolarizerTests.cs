@@ -21,7 +21,7 @@ public class Nec2PolarizerTests(ITestOutputHelper output)
 
     private static PolarizerBuild Build(int count, double lengthMm, double riseMm, Winding winding) =>
         new(WhipKind.Dipole, WhipLengthM, WhipRadiusM, FormerDiameterM, 0, winding,
-            PolarizerBuild.Uniform(count, lengthMm * 1e-3, riseMm * 1e-3), WireRadiusM, null, 1, Surroundings.None);
+            PolarizerBuild.Uniform(count, lengthMm * 1e-3, riseMm * 1e-3), WireRadiusM, null, 1, Surroundings.None(WireRadiusM));
 
     private static (MomSolution Engine, Nec2Output Nec) Solve(WireModel model)
     {

@@ -1,0 +1,37 @@
+using System.Diagnostics;
+using System.Globalization;
+using Helipol.Design.Loading;
+
+namespace Helipol.Bench;
+
+/// <summary>
+/// The cross-section field solve behind the element loading: one cold solve (the cache emptied
+/// first) and one cached look-up, for the tape-on-foam section of docs/fullwave/README.md.
+/// </summary>
+public static class LoadingBench
+{
+    private static readonly CultureInfo Inv = CultureInfo.InvariantCulture;
+
+    public static void Run(int runs = 5)
+    {
+        var section = new ElementCrossSection(0.25e-3, 1.05, 4e-3, 5e-3, null, 0, 1, 0, 3.0, 0.15e-3, null);
+        AddedInductance.ShapeFactor(section); // JIT warm-up
+        var cold = new List<double>();
+        var cached = new List<double>();
+        for (int r = 0; r < runs; r++)
+        {
+            AddedInductance.ClearCache();
+            var sw = Stopwatch.StartNew();
+            AddedInductance.ShapeFactor(section);
+            cold.Add(sw.Elapsed.TotalMilliseconds);
+            sw.Restart();
+            for (int k = 0; k < 1000; k++) AddedInductance.ShapeFactor(section);
+            cached.Add(sw.Elapsed.TotalMilliseconds * 1000 / 1000);
+        }
+        cold.Sort();
+        cached.Sort();
+        var grid = new LogPolarGrid(section.WireRadiusM, AddedInductance.DefaultAngularCells);
+        Console.WriteLine(string.Create(Inv, $"Element loading, cross-section field solve ({grid.RadialCells} × {grid.AngularCells} cells; the vacuum solve is shared): cold {cold[runs / 2]:0.0} ms (min {cold[0]:0.0}), cached {cached[runs / 2]:0.00} µs per look-up (median of {runs})"));
+        Console.WriteLine();
+    }
+}
