@@ -25,7 +25,7 @@ public static class SweepVersusNec2
         const double f0 = 5.6e9, f1 = 6.0e9;
         var freqs = Enumerable.Range(0, 201).Select(i => f0 + (f1 - f0) * i / 200).ToArray();
         var build = new PolarizerBuild(WhipKind.Dipole, 24.3e-3, 0.5e-3, 28e-3, 0, Winding.Right,
-            PolarizerBuild.Uniform(5, 22.1e-3, 16.6e-3), 0.4e-3, null, 1, Surroundings.None);
+            PolarizerBuild.Uniform(5, 22.1e-3, 16.6e-3), 0.4e-3, null, 1, Surroundings.None(0.4e-3));
         var model = PolarizerWires.Build(build, f1);
         var engine = new List<double>();
         var parts = new List<(double Create, double Sweep, double Cut)>();
