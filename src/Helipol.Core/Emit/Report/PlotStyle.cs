@@ -34,6 +34,10 @@ public static class PlotStyle
         // The plots use the very file the sheets use, so plot lettering and sheet lettering match.
         if (!File.Exists(SheetFonts.DejaVuSansPath)) return false;
         Fonts.AddFontFile(FontName, SheetFonts.DejaVuSansPath);
+        // Set as the library's default before the first plot is made, so every label of every
+        // plot (colour bars and polar labels included) is born in it; setting fonts item by item
+        // after the fact left a colour bar's first render in another face.
+        Fonts.Default = FontName;
         return true;
     });
 
@@ -44,8 +48,8 @@ public static class PlotStyle
     /// <summary>A new plot in the house style: the font applied to every label, white background.</summary>
     public static Plot NewPlot()
     {
-        var plt = new Plot();
-        return plt;
+        _ = Registered.Value;
+        return new Plot();
     }
 
     /// <summary>Applies the font to everything in the plot; call after the last item is added.</summary>
@@ -53,7 +57,6 @@ public static class PlotStyle
     {
         plt.Title(title, size: 15);
         plt.Axes.Title.Label.Bold = false;
-        if (Registered.Value) plt.Font.Set(FontName);
         plt.Legend.FontSize = 12;
         plt.Legend.ShadowColor = Colors.Transparent;
         plt.Legend.OutlineColor = Grey;
