@@ -38,6 +38,8 @@ public static class PlotStyle
         // plot (colour bars and polar labels included) is born in it; setting fonts item by item
         // after the fact left a colour bar's first render in another face.
         Fonts.Default = FontName;
+        Fonts.Sans = FontName;
+        Fonts.Serif = FontName;
         return true;
     });
 
@@ -57,10 +59,26 @@ public static class PlotStyle
     {
         plt.Title(title, size: 15);
         plt.Axes.Title.Label.Bold = false;
+        if (Registered.Value)
+            foreach (var axis in plt.Axes.GetAxes())
+            {
+                // Axis labels carry their own face, fixed when the axis is made; name ours.
+                axis.Label.FontName = FontName;
+                axis.Label.Bold = false;
+                axis.TickLabelStyle.FontName = FontName;
+            }
         plt.Legend.FontSize = 12;
         plt.Legend.ShadowColor = Colors.Transparent;
         plt.Legend.OutlineColor = Grey;
         plt.Legend.BackgroundColor = Colors.White.WithAlpha(0.9);
+    }
+
+    /// <summary>A label style in the house face, upright and not bold.</summary>
+    public static void Plain(LabelStyle style)
+    {
+        if (!Registered.Value) return;
+        style.FontName = FontName;
+        style.Bold = false;
     }
 
     /// <summary>A data curve in the house style.</summary>

@@ -231,6 +231,7 @@ public static class ReportPlots
         hm.Colormap = new ScottPlot.Colormaps.Viridis();
         var bar = plt.Add.ColorBar(hm);
         bar.Label = "search objective score, not axial ratio (capped at 40)";
+        PlotStyle.Plain(bar.LabelStyle);
         if (solvedLengthM is { } l && solvedRiseM is { } h)
         {
             var m = plt.Add.Marker(l * 1e3, h * 1e3);
