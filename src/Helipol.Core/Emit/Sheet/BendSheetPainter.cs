@@ -93,10 +93,14 @@ public static class BendSheetPainter
         {
             var part = p;
             var first = p == 0;
-            yield return new Block((first ? 8 : 0) + wrap.HeightMm + 4, (pen, top) =>
+            var caption = pieces > 1 ? 4.5 : 0;
+            yield return new Block((first ? 8 : 0) + caption + wrap.HeightMm + 4, (pen, top) =>
             {
-                if (first) pen.Text("2  Wrap template: cut out, wrap round the former (bottom edge down), mark the lines", m, top + 4, 3.2);
-                WrapTemplatePart(pen, wrap, part, pieces, pieceW, m, first ? top + 8 : top);
+                if (first) pen.Text("2  Wrap template: cut out, printed side out, wrap round the former (bottom edge down), mark the lines", m, top + 4, 3.2);
+                var y = first ? top + 8 : top;
+                if (pieces > 1)
+                    pen.Text(string.Create(ci, $"part {part + 1} of {pieces}{(part + 1 < pieces ? $": its right edge joins part {part + 2}'s left edge, crosses on crosses" : ": the glue tab closes the ring onto part 1")}"), m, y + 3, 2.4, grey: true);
+                WrapTemplatePart(pen, wrap, part, pieces, pieceW, m, y + caption);
             });
         }
         yield return new Block(4, (pen, top) =>
@@ -189,7 +193,16 @@ public static class BendSheetPainter
             pen.Rect(x + w, y, wrap.GlueTabMm, wrap.HeightMm, 0.2, [1f, 1f]);
             pen.Text("glue", x + w + 1, y + wrap.HeightMm / 2 + 1, 2.2, grey: true);
         }
-        if (pieces > 1) pen.Text($"part {p + 1} of {pieces}", x + 1, y + wrap.HeightMm - 1, 2.2, grey: true);
+        if (pieces > 1)
+        {
+            // Join marks: numbered crosses on each cut edge, the same number on both parts of a joint.
+            foreach (var f in new[] { 0.3, 0.7 })
+            {
+                var jy = y + f * wrap.HeightMm;
+                if (p + 1 < pieces) JoinCross(pen, x + w, jy, p + 1, right: true);
+                if (p > 0) JoinCross(pen, x, jy, p, right: false);
+            }
+        }
         pen.Canvas.Save();
         pen.Canvas.ClipRect(new SKRect((float)x, (float)y, (float)(x + w), (float)(y + wrap.HeightMm)));
         foreach (var line in wrap.Lines)
@@ -203,6 +216,15 @@ public static class BendSheetPainter
             pen.Text(label.ElementNumber.ToString(CultureInfo.InvariantCulture), x + label.BaselineLeft.X - from,
                 y + wrap.HeightMm - label.BaselineLeft.Y, WrapTemplate.LabelSizeMm);
         }
+    }
+
+    /// <summary>A cross on a cut edge with the joint's number outside the part.</summary>
+    private static void JoinCross(SheetPen pen, double x, double y, int joint, bool right)
+    {
+        pen.Line(x - 2, y, x + 2, y, 0.3);
+        pen.Line(x, y - 2, x, y + 2, 0.3);
+        var label = "J" + joint.ToString(CultureInfo.InvariantCulture);
+        pen.Text(label, right ? x + 2.5 : x - 2.5, y + 3.4, 2.2, right ? SKTextAlign.Left : SKTextAlign.Right);
     }
 
     private static void WindingDrawing(SheetPen pen, PolarizerGeometry g, double x, double top)
