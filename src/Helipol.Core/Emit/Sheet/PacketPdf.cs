@@ -4,8 +4,9 @@ using Helipol.Geometry;
 namespace Helipol.Emit.Sheet;
 
 /// <summary>
-/// packet.pdf: the build packet. Summary pages (the summary lines, then any plots), the bend sheet,
-/// then the ring templates at 1:1 (top face beside the mirrored bottom face) for cutting by hand.
+/// packet.pdf: the build packet. Summary pages (the summary lines, then every plot), the assembly
+/// steps with their drawn views and the bench checks, the bend sheet, then (for a former of foam
+/// rings) the ring templates at 1:1 for cutting by hand.
 /// </summary>
 public static class PacketPdf
 {
@@ -15,8 +16,9 @@ public static class PacketPdf
     {
         var pages = new List<Action<SKCanvas>>();
         pages.AddRange(SummaryPages(g));
+        pages.AddRange(Assembly.AssemblyPages.Pages(g));
         pages.AddRange(BendSheetPainter.Pages(g));
-        pages.AddRange(RingPages(g));
+        if (!g.Input.FormerPrinted) pages.AddRange(RingPages(g));
         return PdfPages.Write(g.Input.Paper, $"Build packet: {g.Input.DesignName}", pages);
     }
 

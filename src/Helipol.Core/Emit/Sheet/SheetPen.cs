@@ -54,6 +54,20 @@ internal sealed class SheetPen : IDisposable
         Canvas.DrawPath(path, _stroke);
     }
 
+    public void StrokePath(SKPath path, double width, SKColor color)
+    {
+        _stroke.StrokeWidth = (float)width;
+        _stroke.Color = color;
+        Canvas.DrawPath(path, _stroke);
+        _stroke.Color = SKColors.Black;
+    }
+
+    public void FillCircle(double cx, double cy, double r, SKColor color)
+    {
+        _fill.Color = color;
+        Canvas.DrawCircle((float)cx, (float)cy, (float)r, _fill);
+    }
+
     public void FillPath(SKPath path, SKColor color)
     {
         _fill.Color = color;
