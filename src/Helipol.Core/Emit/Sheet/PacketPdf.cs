@@ -100,7 +100,7 @@ public static class PacketPdf
                 pen.Text($"Ring templates at 1:1: {g.Input.DesignName}", m, 17, 5);
                 var tiled = items.FirstOrDefault(p => p.Tile.Count > 1);
                 pen.Text(tiled is null ? "Cut on the outline; the V-notch marks azimuth 0 and lines the rings up when stacked"
-                    : string.Create(System.Globalization.CultureInfo.InvariantCulture, $"Tile {tiled.Tile.Number} of {tiled.Tile.Count} of one face: tape the tiles so the crosses of the same number coincide"), m, 23, 3, grey: true);
+                    : string.Create(System.Globalization.CultureInfo.InvariantCulture, $"Tile {tiled.Tile.Number} of {tiled.Tile.Count} of {tiled.Drawing.Name}: tape the tiles so the crosses of the same number coincide"), m, 23, 3, grey: true);
                 BendSheetPainter.CalibrationBars(pen, m);
                 foreach (var p in items) Layout.Tiling.Paint(pen, p.Tile, p.Left, p.Top, p.Drawing.Draw);
             };

@@ -73,6 +73,7 @@ internal static class RingTemplatePainter
         // The captions start 4 mm left of the outline, that is 2 mm inside the box.
         var w = Math.Max(2 * (r + 6), 2 + textW + 1);
         var h = 2 * (r + 6) + 2 + 3.5 * lines.Count;
-        return new Layout.Drawing(w, h, pen => Paint(pen, v, r + 6, r + 6, designName));
+        return new Layout.Drawing(w, h, pen => Paint(pen, v, r + 6, r + 6, designName),
+            $"ring {v.RingNumber}, {(v.Face == RingFace.Top ? "top face" : "bottom face, mirrored")}");
     }
 }

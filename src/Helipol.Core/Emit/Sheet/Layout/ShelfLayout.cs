@@ -1,7 +1,7 @@
 namespace Helipol.Emit.Sheet.Layout;
 
 /// <summary>A drawing to place: its full size in mm and how to draw it with its top-left corner at the origin.</summary>
-internal sealed record Drawing(double WidthMm, double HeightMm, Action<SheetPen> Draw);
+internal sealed record Drawing(double WidthMm, double HeightMm, Action<SheetPen> Draw, string Name = "");
 
 /// <summary>Where a drawing (or one tile of it) lands: page index, top-left corner on the page, and
 /// the tile it shows.</summary>
