@@ -232,6 +232,7 @@ public static class ReportPlots
         var bar = plt.Add.ColorBar(hm);
         bar.Label = "search objective score, not axial ratio (capped at 40)";
         PlotStyle.Plain(bar.LabelStyle);
+        PlotStyle.Plain(bar.Axis.Label);
         if (solvedLengthM is { } l && solvedRiseM is { } h)
         {
             var m = plt.Add.Marker(l * 1e3, h * 1e3);
