@@ -78,11 +78,11 @@ public static class BuildVerb
         return command;
     }
 
-    /// <summary>The fabrication set for the solved layout; the packet carries the report's main plots.</summary>
+    /// <summary>The fabrication set for the solved layout; the packet carries every plot of the report.</summary>
     private static IReadOnlyList<FabricationFile> FabricationFiles(PolarizerDesign design, SolvedPolarizer solved, SweepResult sweep,
         ToleranceResult tolerance, IReadOnlyList<(string Name, byte[] Bytes)> report)
     {
-        string[] packetPlots = ["ar-gain.png", "pattern-azimuth.png", "pattern-elevation.png"];
+        string[] packetPlots = ["ar-gain.png", "vswr.png", "pattern-azimuth.png", "pattern-elevation.png", "ar-map.png"];
         var plots = packetPlots.Select(n => report.First(r => r.Name == n).Bytes).ToList();
         var input = BuildInputFromModel.Create(design, solved.Layout, solved.Winding, PacketSummary.Lines(design, solved, sweep, tolerance), plots,
             (tolerance.CutToleranceMm, tolerance.RiseToleranceMm));

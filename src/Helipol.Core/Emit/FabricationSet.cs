@@ -13,7 +13,7 @@ namespace Helipol.Emit;
 public static class FabricationSet
 {
     public static readonly IReadOnlyList<string> FileNames =
-        ["rings.dxf", "drill.dxf", "former.stl", "former.3mf", "jig.stl", "bend-sheet.png", "bend-sheet.pdf", "packet.pdf"];
+        ["rings.dxf", "drill.dxf", "former.stl", "former.3mf", "jig.stl", "bend-sheet.png", "bend-sheet.pdf", "packet.pdf", "assembly.png"];
 
     public static IReadOnlyList<FabricationFile> Render(PolarizerBuildInput input)
     {
@@ -31,6 +31,7 @@ public static class FabricationSet
             new("bend-sheet.png", BendSheetPng.Write(g)),
             new("bend-sheet.pdf", BendSheetPdf.Write(g)),
             new("packet.pdf", PacketPdf.Write(g)),
+            new("assembly.png", Sheet.Assembly.AssemblyPng.Write(g)),
         ];
     }
 }

@@ -11,6 +11,9 @@ public enum HelixWinding { Right, Left }
 /// <summary>Paper for the printable sheets.</summary>
 public enum PaperSize { A4, Letter }
 
+/// <summary>The whip the former goes on: a centre-fed dipole or a monopole over a ground plane.</summary>
+public enum WhipShape { Dipole, Monopole }
+
 /// <summary>One line of the build packet's summary page.</summary>
 public sealed record SummaryLine(string Key, string Value);
 
@@ -37,6 +40,15 @@ public sealed record PolarizerBuildInput
     public required double FormerHeightMm { get; init; }
     /// <summary>Outside diameter of the whip's cover the former slides over, mm.</summary>
     public required double CoverDiameterMm { get; init; }
+    /// <summary>True when the former is a printed sleeve (PLA, PETG) rather than a stack of foam rings.</summary>
+    public bool FormerPrinted { get; init; }
+    /// <summary>Name of the former's material, for the assembly steps.</summary>
+    public string FormerMaterial { get; init; } = "foam";
+    public WhipShape Whip { get; init; } = WhipShape.Dipole;
+    /// <summary>Whip length (tip to tip for a dipole, ground to tip for a monopole), mm; 0 when not known.</summary>
+    public double WhipLengthMm { get; init; }
+    /// <summary>Height of the elements' middle above the feed gap (dipole) or the ground plane (monopole), mm.</summary>
+    public double CentreAboveFeedMm { get; init; }
     public string WrapMaterial { get; init; } = "none";
     public double WrapThicknessMm { get; init; }
     public int WrapLayers { get; init; }

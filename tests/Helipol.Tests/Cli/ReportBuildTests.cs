@@ -5,7 +5,7 @@ public class ReportBuildTests
 {
     private static readonly string[] Expected =
     {
-        "ar-gain.png", "ar-map.png", "bend-sheet.pdf", "bend-sheet.png", "design.json", "drill.dxf", "former.3mf", "former.stl",
+        "ar-gain.png", "ar-map.png", "assembly.png", "bend-sheet.pdf", "bend-sheet.png", "design.json", "drill.dxf", "former.3mf", "former.stl",
         "jig.stl", "packet.pdf", "pattern-azimuth.png", "pattern-elevation.png", "report.md", "rings.dxf", "vswr.png",
     };
 

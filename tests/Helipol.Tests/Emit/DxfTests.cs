@@ -140,7 +140,7 @@ for e in doc.modelspace():
         AssertCleanMillimetreDrawing(e);
         var holeRadius = (g.Input.WireDiameterMm + g.Input.DrillClearanceMm) / 2;
         var holes = e.Where(x => x.Kind == "CIRCLE" && x.Layer == "DRILL").ToList();
-        var expected = DrillTemplates.Views(g).SelectMany(v => v.Holes.Select(h => v.Centre + h.Centre)).ToList();
+        var expected = Helipol.Emit.Dxf.DrillDxf.Placed(g).SelectMany(v => v.Holes.Select(h => v.Centre + h.Centre)).ToList();
         Assert.Equal(expected.Count, holes.Count);
         Assert.All(holes, h => Assert.True(Near(h.Numbers[2], holeRadius)));
         foreach (var p in expected)

@@ -93,6 +93,12 @@ public static class ReportMarkdown
         L($"");
         L($"![search objective map](ar-map.png)");
         L($"");
+        L($"## Assembly and bench checks");
+        L($"");
+        L($"The packet's assembly steps and bench checks, with the views drawn from this design's geometry (print packet.pdf to build; these are for the screen).");
+        L($"");
+        L($"![assembly steps and bench checks](assembly.png)");
+        L($"");
         L($"## Tolerance");
         L($"");
         L($"{tolerance.Builds} simulated builds (seed {tolerance.Seed}; every element ±{design.Tolerance.ElementLengthM * 1e3:0.##} mm in length, ±{design.Tolerance.ElementRiseM * 1e3:0.##} mm in rise, ±{design.Tolerance.AzimuthRad * 180 / Math.PI:0.#}° in placement; wrap ±{design.Tolerance.WrapThicknessFraction * 100:0}% thick), judged like the verdict: at band low, centre and high over the coverage window ({VerdictJudge.Window(design)}, elevations at least 10° apart, every 10° of azimuth):");

@@ -21,6 +21,8 @@ public static class BendSheetPainter
     public const double InchBarMm = 2 * Paper.MmPerInch;
     /// <summary>Top of the first section on every page, below the title and the bars, mm.</summary>
     public const double ContentTopMm = 38;
+    /// <summary>Height of the bend template's two caption lines above each tile, mm.</summary>
+    public const double ArcCaptionMm = 11;
 
     /// <summary>A section (or one part of one) that stays whole on a page: its height and how to
     /// draw it with its top edge at a given page height.</summary>
@@ -56,8 +58,7 @@ public static class BendSheetPainter
         var i = g.Input;
         var m = MarginMm;
         var ci = CultureInfo.InvariantCulture;
-        var of = pages > 1 ? string.Create(ci, $" (page {page} of {pages})") : "";
-        pen.Text($"Bend sheet: {i.DesignName}{of}", m, 17, 5);
+        pen.Text($"Bend sheet: {i.DesignName}", m, 17, 5);
         pen.Text(string.Create(ci, $"{BuildTable.SenseLabel(i.Sense)} · {i.ElementCount} elements · {BuildTable.FrequencyLabel(i.FrequencyHz)} · print at 100 % (actual size), then check both bars"), m, 23, 3, grey: true);
         CalibrationBars(pen, m);
     }
@@ -92,25 +93,55 @@ public static class BendSheetPainter
         {
             var part = p;
             var first = p == 0;
-            yield return new Block((first ? 8 : 0) + wrap.HeightMm + 4, (pen, top) =>
+            var caption = pieces > 1 ? 4.5 : 0;
+            yield return new Block((first ? 8 : 0) + caption + wrap.HeightMm + 4, (pen, top) =>
             {
-                if (first) pen.Text("2  Wrap template: cut out, wrap round the former (bottom edge down), mark the lines", m, top + 4, 3.2);
-                WrapTemplatePart(pen, wrap, part, pieces, pieceW, m, first ? top + 8 : top);
+                if (first) pen.Text("2  Wrap template: cut out, printed side out, wrap round the former (bottom edge down), mark the lines", m, top + 4, 3.2);
+                var y = first ? top + 8 : top;
+                if (pieces > 1)
+                    pen.Text(string.Create(ci, $"part {part + 1} of {pieces}{(part + 1 < pieces ? $": its right edge joins part {part + 2}'s left edge, crosses on crosses" : ": the glue tab closes the ring onto part 1")}"), m, y + 3, 2.4, grey: true);
+                WrapTemplatePart(pen, wrap, part, pieces, pieceW, m, y + caption);
             });
         }
         yield return new Block(4, (pen, top) =>
             pen.Text(string.Create(ci, $"{wrap.WidthMm:0.00} mm = one turn of the former; numbers at each element's lower end"), m, top, 2.4, grey: true));
 
-        // 3. Arc bend template and 4. winding drawing, side by side.
-        yield return new Block(60, (pen, top) =>
+        // 3. Arc bend template at 1:1, tiled over as many pages as it needs, then 4. winding drawing.
+        var arc = ArcDrawing.For(g);
+        var tileW = pageW - 2 * m;
+        var tileH = Paper.SizeMm(i.Paper).HeightMm - ContentTopMm - MarginMm - ArcCaptionMm - 1;
+        var half = (pageW - 2 * m) / 2;
+        if (arc.WidthMm <= half - 2 && arc.HeightMm <= 120)
         {
-            var y = top + 4;
-            var boxW = (pageW - 2 * m) / 2;
-            pen.Text("3  Bend: the wire must lie on this arc", m, y, 3.2);
-            pen.Text("4  Which way the elements run", m + boxW, y, 3.2);
-            ArcTemplate(pen, g, m, y + 4, boxW - 4, 44);
-            WindingDrawing(pen, g, m + boxW, y + 4);
-        });
+            // A small arc stands beside the winding drawing, whole, in a box of its own width.
+            yield return new Block(Math.Max(ArcCaptionMm + arc.HeightMm + 1, 60), (pen, top) =>
+            {
+                pen.Text("3  Bend: the wire must lie on this arc", m, top + 4, 3.2);
+                pen.Text(string.Create(ci, $"radius {g.BendRadiusMm:0.00} mm about the cross"), m, top + 8, 2.4, grey: true);
+                Layout.Tiling.Paint(pen, Layout.Tiling.Cut(arc.WidthMm, arc.HeightMm, tileW, tileH)[0], m, top + ArcCaptionMm, arc.Draw);
+                pen.Text("4  Which way the elements run", m + half, top + 4, 3.2);
+                WindingDrawing(pen, g, m + half, top + 8);
+            });
+        }
+        else
+        {
+            foreach (var tile in Layout.Tiling.Cut(arc.WidthMm, arc.HeightMm, tileW, tileH))
+            {
+                var t = tile;
+                yield return new Block(ArcCaptionMm + t.H + 1, (pen, top) =>
+                {
+                    var of = t.Count > 1 ? string.Create(ci, $", tile {t.Number} of {t.Count}: tape the tiles so the crosses of the same number coincide") : "";
+                    pen.Text("3  Bend: the wire must lie on this arc, at 1:1" + of, m, top + 4, t.Count > 1 ? 2.8 : 3.2);
+                    pen.Text(string.Create(ci, $"radius {g.BendRadiusMm:0.00} mm about the cross; end tick to end tick {g.Input.ElementLengthMm:0.00} mm along the arc"), m, top + 8, 2.4, grey: true);
+                    Layout.Tiling.Paint(pen, t, m, top + ArcCaptionMm, arc.Draw);
+                });
+            }
+            yield return new Block(60, (pen, top) =>
+            {
+                pen.Text("4  Which way the elements run", m, top + 4, 3.2);
+                WindingDrawing(pen, g, m, top + 8);
+            });
+        }
 
         // 5. Build table.
         var rows = BuildTable.Rows(g);
@@ -162,7 +193,16 @@ public static class BendSheetPainter
             pen.Rect(x + w, y, wrap.GlueTabMm, wrap.HeightMm, 0.2, [1f, 1f]);
             pen.Text("glue", x + w + 1, y + wrap.HeightMm / 2 + 1, 2.2, grey: true);
         }
-        if (pieces > 1) pen.Text($"part {p + 1} of {pieces}", x + 1, y + wrap.HeightMm - 1, 2.2, grey: true);
+        if (pieces > 1)
+        {
+            // Join marks: numbered crosses on each cut edge, the same number on both parts of a joint.
+            foreach (var f in new[] { 0.3, 0.7 })
+            {
+                var jy = y + f * wrap.HeightMm;
+                if (p + 1 < pieces) JoinCross(pen, x + w, jy, p + 1, right: true);
+                if (p > 0) JoinCross(pen, x, jy, p, right: false);
+            }
+        }
         pen.Canvas.Save();
         pen.Canvas.ClipRect(new SKRect((float)x, (float)y, (float)(x + w), (float)(y + wrap.HeightMm)));
         foreach (var line in wrap.Lines)
@@ -178,39 +218,13 @@ public static class BendSheetPainter
         }
     }
 
-    private static void ArcTemplate(SheetPen pen, PolarizerGeometry g, double x, double top, double w, double h)
+    /// <summary>A cross on a cut edge with the joint's number outside the part.</summary>
+    private static void JoinCross(SheetPen pen, double x, double y, int joint, bool right)
     {
-        var rho = g.BendRadiusMm;
-        var sweep = g.Input.ElementLengthMm / rho;
-        // The arc stands symmetric about a vertical line, its apex up; the centre lies below.
-        var cx = x + w / 2;
-        var apexY = top + 4;
-        var cy = apexY + rho;
-        using var path = new SKPath();
-        var steps = 200;
-        for (var k = 0; k <= steps; k++)
-        {
-            var a = -sweep / 2 + sweep * k / steps;
-            var px = (float)(cx + rho * Math.Sin(a));
-            var py = (float)(cy - rho * Math.Cos(a));
-            if (k == 0) path.MoveTo(px, py); else path.LineTo(px, py);
-        }
-        pen.Canvas.Save();
-        pen.Canvas.ClipRect(new SKRect((float)x, (float)top, (float)(x + w), (float)(top + h)));
-        pen.Path(path, 0.5);
-        foreach (var a in new[] { -sweep / 2, sweep / 2 })
-        {
-            var (sx, sy) = (Math.Sin(a), -Math.Cos(a));
-            pen.Line(cx + (rho - 2) * sx, cy + (rho - 2) * sy, cx + (rho + 2) * sx, cy + (rho + 2) * sy, 0.3);
-        }
-        if (cy < top + h)
-        {
-            pen.Line(cx - 1.5, cy, cx + 1.5, cy, 0.2);
-            pen.Line(cx, cy - 1.5, cx, cy + 1.5, 0.2);
-            pen.Line(cx, cy, cx, apexY, 0.15, dash: [1f, 1f]);
-        }
-        pen.Canvas.Restore();
-        pen.Text(string.Create(CultureInfo.InvariantCulture, $"radius {rho:0.00} mm, tick to tick {g.Input.ElementLengthMm:0.00} mm along the arc"), x, top + h + 3, 2.4, grey: true);
+        pen.Line(x - 2, y, x + 2, y, 0.3);
+        pen.Line(x, y - 2, x, y + 2, 0.3);
+        var label = "J" + joint.ToString(CultureInfo.InvariantCulture);
+        pen.Text(label, right ? x + 2.5 : x - 2.5, y + 3.4, 2.2, right ? SKTextAlign.Left : SKTextAlign.Right);
     }
 
     private static void WindingDrawing(SheetPen pen, PolarizerGeometry g, double x, double top)

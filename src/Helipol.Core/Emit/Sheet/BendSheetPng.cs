@@ -30,6 +30,7 @@ public static class BendSheetPng
             canvas.Translate(0, k * pageH);
             canvas.Scale(pxPerMm);
             pages[k](canvas);
+            PageFoot.Draw(canvas, g.Input.Paper, $"Bend sheet: {g.Input.DesignName}", k + 1, pages.Count);
             canvas.Restore();
         }
         canvas.Flush();

@@ -4,8 +4,9 @@ using Helipol.Geometry;
 namespace Helipol.Emit.Sheet;
 
 /// <summary>
-/// packet.pdf: the build packet. Summary pages (the summary lines, then any plots), the bend sheet,
-/// then the ring templates at 1:1 (top face beside the mirrored bottom face) for cutting by hand.
+/// packet.pdf: the build packet. Summary pages (the summary lines, then every plot), the assembly
+/// steps with their drawn views and the bench checks, the bend sheet, then (for a former of foam
+/// rings) the ring templates at 1:1 for cutting by hand.
 /// </summary>
 public static class PacketPdf
 {
@@ -15,8 +16,9 @@ public static class PacketPdf
     {
         var pages = new List<Action<SKCanvas>>();
         pages.AddRange(SummaryPages(g));
+        pages.AddRange(Assembly.AssemblyPages.Pages(g));
         pages.AddRange(BendSheetPainter.Pages(g));
-        pages.AddRange(RingPages(g));
+        if (!g.Input.FormerPrinted) pages.AddRange(RingPages(g));
         return PdfPages.Write(g.Input.Paper, $"Build packet: {g.Input.DesignName}", pages);
     }
 
@@ -73,31 +75,34 @@ public static class PacketPdf
         }));
     }
 
+    /// <summary>
+    /// Ring templates at 1:1: every ring's top face and its mirrored bottom face as separate
+    /// drawings, placed by <see cref="Layout.ShelfLayout"/> so none overlaps another or leaves the
+    /// printable area; a face too large for one page is tiled with numbered join crosses.
+    /// </summary>
     private static IEnumerable<Action<SKCanvas>> RingPages(PolarizerGeometry g)
     {
         var (pageW, pageH) = Paper.SizeMm(g.Input.Paper);
         var m = BendSheetPainter.MarginMm;
         var r = g.FormerOuterRadiusMm;
-        var rowHeight = 2 * r + 22;
-        var top = 40.0;
-        var perPage = Math.Max(1, (int)Math.Floor((pageH - m - top) / rowHeight));
-        var rings = Enumerable.Range(1, g.Input.RingCount).ToList();
-        foreach (var chunk in rings.Chunk(perPage))
+        var top = BendSheetPainter.ContentTopMm;
+        var drawings = new List<Layout.Drawing>();
+        for (var ring = 1; ring <= g.Input.RingCount; ring++)
+            foreach (var face in new[] { RingFace.Top, RingFace.Bottom })
+                drawings.Add(RingTemplatePainter.AsDrawing(RingTemplates.View(g, ring, face, new Point2(0, 0), r, g.FormerBoreRadiusMm), g.Input.DesignName));
+        var placements = Layout.ShelfLayout.Place(drawings, m, top, pageW - m, pageH - m);
+        foreach (var page in placements.GroupBy(p => p.Page).OrderBy(p => p.Key))
         {
+            var items = page.ToList();
             yield return canvas =>
             {
                 using var pen = new SheetPen(canvas);
                 pen.Text($"Ring templates at 1:1: {g.Input.DesignName}", m, 17, 5);
+                var tiled = items.FirstOrDefault(p => p.Tile.Count > 1);
+                pen.Text(tiled is null ? "Cut on the outline; the V-notch marks azimuth 0 and lines the rings up when stacked"
+                    : string.Create(System.Globalization.CultureInfo.InvariantCulture, $"Tile {tiled.Tile.Number} of {tiled.Tile.Count} of {tiled.Drawing.Name}: tape the tiles so the crosses of the same number coincide"), m, 23, 3, grey: true);
                 BendSheetPainter.CalibrationBars(pen, m);
-                var y = top + r + 6;
-                foreach (var ring in chunk)
-                {
-                    var topView = RingTemplates.View(g, ring, RingFace.Top, new Point2(0, 0), r, g.FormerBoreRadiusMm);
-                    var bottomView = RingTemplates.View(g, ring, RingFace.Bottom, new Point2(0, 0), r, g.FormerBoreRadiusMm);
-                    RingTemplatePainter.Paint(pen, topView, m + r + 6, y, g.Input.DesignName);
-                    RingTemplatePainter.Paint(pen, bottomView, pageW / 2 + r + 6, y, g.Input.DesignName);
-                    y += rowHeight;
-                }
+                foreach (var p in items) Layout.Tiling.Paint(pen, p.Tile, p.Left, p.Top, p.Drawing.Draw);
             };
         }
     }

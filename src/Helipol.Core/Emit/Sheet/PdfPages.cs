@@ -10,8 +10,11 @@ namespace Helipol.Emit.Sheet;
 /// </summary>
 internal static class PdfPages
 {
+    /// <summary>Writes the pages, each with "page n of m" in its foot (a one-page sheet too), so
+    /// a loose page can always be put back in order.</summary>
     public static byte[] Write(PaperSize paper, string title, IEnumerable<Action<SKCanvas>> pages)
     {
+        var all = pages.ToList();
         var (wMm, hMm) = Paper.SizeMm(paper);
         using var stream = new MemoryStream();
         var metadata = new SKDocumentPdfMetadata
@@ -30,11 +33,12 @@ internal static class PdfPages
         };
         using (var doc = SKDocument.CreatePdf(stream, metadata))
         {
-            foreach (var draw in pages)
+            for (var k = 0; k < all.Count; k++)
             {
                 var canvas = doc.BeginPage((float)(wMm * Paper.PointsPerMm), (float)(hMm * Paper.PointsPerMm));
                 canvas.Scale((float)Paper.PointsPerMm);
-                draw(canvas);
+                all[k](canvas);
+                PageFoot.Draw(canvas, paper, title, k + 1, all.Count);
                 doc.EndPage();
             }
             doc.Close();

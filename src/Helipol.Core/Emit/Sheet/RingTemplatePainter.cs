@@ -40,9 +40,40 @@ internal static class RingTemplatePainter
             var (lx, ly) = P(Point2.Polar(r + 2.5, RingFaceView.DrawingAngle(v.Face, m.AzimuthRad)));
             pen.Text(m.ElementNumber.ToString(CultureInfo.InvariantCulture), lx, ly + 1, 2.6, SKTextAlign.Center);
         }
-        var face = v.Face == RingFace.Top ? "top face" : "bottom face, mirrored (lay the ring face down)";
-        pen.Text($"Ring {v.RingNumber}, {face}", cx - r - 4, cy + r + 8, 2.8);
-        pen.Text(designName, cx - r - 4, cy + r + 11.5, 2.4, grey: true);
-        if (RingTemplates.EndNote(v) is { } note) pen.Text(note + " from this face", cx - r - 4, cy + r + 15, 2.4);
+        var lines = Caption(v, designName);
+        var baseline = cy + r + 8;
+        foreach (var (text, size) in lines)
+        {
+            pen.Text(text, cx - r - 4, baseline, size, grey: text == designName);
+            baseline += 3.5;
+        }
+    }
+
+    /// <summary>The caption lines under a face and their sizes.</summary>
+    private static List<(string Text, double Size)> Caption(RingFaceView v, string designName)
+    {
+        var lines = new List<(string, double)>
+        {
+            ($"Ring {v.RingNumber}, {(v.Face == RingFace.Top ? "top face" : "bottom face, mirrored")}", 2.8),
+        };
+        if (v.Face == RingFace.Bottom) lines.Add(("lay the ring face down on this one", 2.4));
+        lines.Add((designName, 2.4));
+        if (RingTemplates.EndNote(v) is { } note) lines.Add((note + " from this face", 2.4));
+        return lines;
+    }
+
+    /// <summary>The face as a drawing whose box holds the outline, the element numbers round it and
+    /// every caption line (measured with the sheet font), origin at the box's top-left.</summary>
+    public static Layout.Drawing AsDrawing(RingFaceView v, string designName)
+    {
+        var r = v.OuterRadiusMm;
+        var lines = Caption(v, designName);
+        var textW = lines.Max(l => SheetPen.TextWidth(l.Text, l.Size));
+        // Numbers stand 2.5 mm outside the outline, 2.6 mm high: 6 mm round the ring holds them.
+        // The captions start 4 mm left of the outline, that is 2 mm inside the box.
+        var w = Math.Max(2 * (r + 6), 2 + textW + 1);
+        var h = 2 * (r + 6) + 2 + 3.5 * lines.Count;
+        return new Layout.Drawing(w, h, pen => Paint(pen, v, r + 6, r + 6, designName),
+            $"ring {v.RingNumber}, {(v.Face == RingFace.Top ? "top face" : "bottom face, mirrored")}");
     }
 }

@@ -54,17 +54,52 @@ internal sealed class SheetPen : IDisposable
         Canvas.DrawPath(path, _stroke);
     }
 
+    public void StrokePath(SKPath path, double width, SKColor color)
+    {
+        _stroke.StrokeWidth = (float)width;
+        _stroke.Color = color;
+        Canvas.DrawPath(path, _stroke);
+        _stroke.Color = SKColors.Black;
+    }
+
+    public void FillCircle(double cx, double cy, double r, SKColor color)
+    {
+        _fill.Color = color;
+        Canvas.DrawCircle((float)cx, (float)cy, (float)r, _fill);
+    }
+
     public void FillPath(SKPath path, SKColor color)
     {
         _fill.Color = color;
         Canvas.DrawPath(path, _fill);
     }
 
+    /// <summary>While set, text whose box is not wholly inside this window (in the current drawing
+    /// coordinates) is left out: a tile of a large drawing shows only the labels it holds whole,
+    /// its neighbour (overlapping it) shows the rest.</summary>
+    public SKRect? TextWindow { get; set; }
+
+    /// <summary>Advance width of a text at a size, mm.</summary>
+    public static double TextWidth(string s, double sizeMm)
+    {
+        using var font = Font(sizeMm);
+        return font.MeasureText(s);
+    }
+
+    private static SKFont Font(double sizeMm) =>
+        // Sizes are in millimetres, so glyph hinting to whole units would wreck the spacing.
+        new(SheetFonts.Typeface, (float)sizeMm) { Subpixel = true, LinearMetrics = true, Hinting = SKFontHinting.None };
+
     /// <summary>Text with its baseline at y; size is the font's em size in mm.</summary>
     public void Text(string s, double x, double y, double sizeMm, SKTextAlign align = SKTextAlign.Left, bool grey = false)
     {
-        // Sizes are in millimetres, so glyph hinting to whole units would wreck the spacing.
-        using var font = new SKFont(SheetFonts.Typeface, (float)sizeMm) { Subpixel = true, LinearMetrics = true, Hinting = SKFontHinting.None };
+        using var font = Font(sizeMm);
+        if (TextWindow is { } win)
+        {
+            var w = font.MeasureText(s);
+            var left = align switch { SKTextAlign.Center => x - w / 2, SKTextAlign.Right => x - w, _ => x };
+            if (left < win.Left || left + w > win.Right || y - sizeMm < win.Top || y + 0.3 * sizeMm > win.Bottom) return;
+        }
         _text.Color = grey ? new SKColor(90, 90, 90) : SKColors.Black;
         Canvas.DrawText(s, (float)x, (float)y, align, font, _text);
     }
