@@ -30,6 +30,8 @@ def main():
         done = {float(r[3]): (float(r[4]) * 1e6, float(r[5])) for r in table.rows
                 if r[0] == case and float(r[3]) > 0}
         for cell in CELLS:
+            if table.find([case, f"{length:g}", f"{diameter:g}", f"{cell:g}"]) is not None:
+                continue
             f, z, secs, mesh = fw.fed_dipole(f"{case}-{cell:g}", length, diameter, cell)
             fr, r = fw.zero_crossing(f, z)
             done[cell] = (fr, r)

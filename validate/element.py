@@ -25,6 +25,8 @@ def main():
                      comments, key=4)
     done = {float(r[3]): float(r[4]) * 1e6 for r in table.rows if float(r[3]) > 0}
     for cell in CELLS:
+        if table.find([CASE, f"{LENGTH:g}", f"{DIAMETER:g}", f"{cell:g}"]) is not None:
+            continue
         f, y, secs, mesh = fw.lit_element(f"element-{cell:g}", LENGTH, DIAMETER, cell)
         fr = fw.peak(f, np.abs(y))
         done[cell] = fr

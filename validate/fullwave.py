@@ -186,12 +186,16 @@ def _setup(cell_lines, pulse=True):
 
 
 def _run(fdtd, name):
-    path = os.path.join(WORK, name)
+    path = os.path.abspath(os.path.join(WORK, name))
     if os.path.isdir(path):
         shutil.rmtree(path)
     os.makedirs(path)
     t0 = time.time()
-    fdtd.Run(path, cleanup=True, verbose=0, numThreads=THREADS)
+    cwd = os.getcwd()
+    try:
+        fdtd.Run(path, cleanup=True, verbose=0, numThreads=THREADS)
+    finally:
+        os.chdir(cwd)     # Run() enters the run folder, which is removed after reading
     return path, time.time() - t0
 
 
@@ -334,6 +338,15 @@ class Table:
                         self.rows.append(line.split(","))
         for c in comments:
             self.comment(c)
+
+    def find(self, key):
+        """The row with this key when resuming (FULLWAVE_RESUME=1), else None."""
+        if os.environ.get("FULLWAVE_RESUME") != "1":
+            return None
+        for r in self.rows:
+            if r[:self.key] == key:
+                return r
+        return None
 
     def comment(self, text):
         if text not in self.comments:
