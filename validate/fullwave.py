@@ -378,5 +378,6 @@ def common_comments():
             f"PML {PML_CELLS} cells at {CLEAR_MM:g} mm from the wire",
             f"Gaussian pulse {F_CENTRE / 1e9:g} GHz +- {F_SPAN / 1e9:g} GHz, end at "
             f"{10 * math.log10(END_CRITERIA):.0f} dB energy",
-            f"mesh: graded, growth {RATIO:g} per cell away from the wire (<= 1.3), "
-            f"largest cell {SMAX_MM:g} mm"]
+            f"mesh: graded, aiming at growth {RATIO:g} per cell away from the wire (the "
+            f"largest actual ratio is on each mesh's line), largest cell {SMAX_MM:g} mm",
+            "run on " + time.strftime("%Y-%m-%d", time.gmtime())]
