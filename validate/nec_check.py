@@ -70,7 +70,7 @@ def main():
     print("case,segments,segment_mm,resonance_mhz,resistance_ohm")
     for case in cases:
         length, diameter = CASES[case]
-        for seg in (11, 15, 21, 25, 31, 41, 49, 61, 81):
+        for seg in (11, 15, 21, 25, 31, 41, 47, 61, 81):
             # NEC-2's thin-wire kernel wants segments of at least about 2 radii (its manual's
             # lower bound for the reduced kernel is 8 radii for 1 % accuracy)
             if length / seg < diameter:
