@@ -47,7 +47,7 @@ def main():
             r0, q = fw.richardson(cells, [done[c][1] for c in cells])
             table.comment(f"{case} extrapolation from cells {', '.join(f'{c:g}' for c in cells)}: "
                           f"order {p:.2f} (f), {q:.2f} (R)")
-            table.add([case, f"{length:g}", f"{diameter:g}", "0", f"{f0 / 1e6:.1f}",
+            table.add_last([case, f"{length:g}", f"{diameter:g}", "0", f"{f0 / 1e6:.1f}",
                        f"{r0:.2f}"])
 
 

@@ -37,7 +37,7 @@ def main():
         cells = sorted(done)
         f0, p = fw.richardson(cells, [done[c] for c in cells])
         table.comment(f"extrapolation from cells {', '.join(f'{c:g}' for c in cells)}: order p = {p:.2f}")
-        table.add([CASE, f"{LENGTH:g}", f"{DIAMETER:g}", "0", f"{f0 / 1e6:.1f}"])
+        table.add_last([CASE, f"{LENGTH:g}", f"{DIAMETER:g}", "0", f"{f0 / 1e6:.1f}"])
         print(f"{CASE} extrapolated: {f0 / 1e6:.1f} MHz (p = {p:.2f})", flush=True)
 
 

@@ -352,6 +352,13 @@ class Table:
         if text not in self.comments:
             self.comments.append(text)
 
+    def add_last(self, row):
+        """Add or replace a row and move it after its case's other rows (the extrapolation)."""
+        self.rows = [r for r in self.rows if r[:self.key] != row[:self.key]]
+        last = max([n for n, r in enumerate(self.rows) if r[0] == row[0]], default=len(self.rows) - 1)
+        self.rows.insert(last + 1, row)
+        self.write()
+
     def add(self, row):
         k = row[:self.key]
         for n, r in enumerate(self.rows):
