@@ -321,14 +321,15 @@ def richardson(cells, values):
 class Table:
     """A CSV table rewritten after each row, so a cut-short run keeps its finished rows.
 
-    Rows already in the file whose key (the first `key` columns) is not produced again are
-    kept, so tables can be filled one mesh at a time; comment lines are kept and extended.
+    With FULLWAVE_RESUME=1 the rows and comment lines already in the file are kept (a row
+    is replaced when its key, the first `key` columns, is produced again), so a table can be
+    filled one mesh or one case at a time; otherwise the table starts empty.
     """
 
     def __init__(self, path, header, comments, key=2):
         self.path, self.header, self.key = path, header, key
         self.comments, self.rows = [], []
-        if os.path.exists(path):
+        if os.path.exists(path) and os.environ.get("FULLWAVE_RESUME") == "1":
             with open(path, encoding="utf-8") as fh:
                 for line in fh:
                     line = line.rstrip("\n")
