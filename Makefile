@@ -11,7 +11,7 @@ APT_PACKAGES := python3-ezdxf admesh poppler-utils nec2c
 TOOL_DIR := .tools
 VERSION := $(shell sed -n 's:.*<Version>\(.*\)</Version>.*:\1:p' Directory.Build.props)
 
-.PHONY: all build run test bench deps clean schema install
+.PHONY: all build run test bench deps clean schema install validate
 
 all: build
 
@@ -39,6 +39,18 @@ install:
 	@if $(DOTNET) tool list --global | grep -q '^helipol '; then $(DOTNET) tool uninstall --global helipol; fi
 	$(DOTNET) tool install --global --add-source $(TOOL_DIR) helipol --version $(VERSION)
 	@case ":$$PATH:" in *":$$HOME/.dotnet/tools:"*) ;; *) echo "add ~/.dotnet/tools to PATH to run helipol: export PATH=\"\$$PATH:\$$HOME/.dotnet/tools\"";; esac
+
+# Full-wave reference tables in docs/fullwave/ (openEMS FDTD; slow, about an hour on two cores;
+# not part of `make test`, whose tests read the committed tables).  See validate/README.md.
+VALIDATE_PACKAGES := openems python3-openems nec2c
+VALIDATE_PY := /usr/bin/python3
+
+validate:
+	@bash .ci/deps.sh $(VALIDATE_PACKAGES)
+	$(VALIDATE_PY) validate/loading.py
+	$(VALIDATE_PY) validate/element.py
+	$(VALIDATE_PY) validate/dipoles.py
+	$(VALIDATE_PY) validate/nec_check.py d24.0x0.5 d22.5x0.8
 
 bench:
 	$(DOTNET) run --project tests/Helipol.Bench -c Release -- $(BENCH_ARGS)
