@@ -11,6 +11,7 @@ internal static class FullWaveEngine
     /// <summary>The FDTD runs' feed: a fixed 0.5 mm gap at the centre (docs/fullwave/README.md).</summary>
     public const double FeedGapM = 0.5e-3;
 
+
     public static MeshedModel FedDipole(double lengthM, double radiusM, DielectricCoating? coating, double maxFrequencyHz) =>
         MeshedModel.Create(new WireModel(
             [new Wire([new Vector3(0, 0, -lengthM / 2), new Vector3(0, 0, 0), new Vector3(0, 0, lengthM / 2)], radiusM, PerfectConductor.Instance, coating, WireEnds.Flat)],
@@ -18,7 +19,9 @@ internal static class FullWaveEngine
 
     /// <summary>
     /// The first zero of the input reactance between the bounds (rising through zero), found by a
-    /// coarse scan and then the secant method; and the resistance there.
+    /// coarse scan and then the secant method; and the resistance there. The wire is meshed at the
+    /// engine's default density for <paramref name="hiHz"/>, as a design swept up to there would be
+    /// (the end caps make the resonance depend slightly on the density, README "The engine").
     /// </summary>
     public static (double FrequencyHz, double ResistanceOhm) Resonance(double lengthM, double radiusM, DielectricCoating? coating, double loHz, double hiHz)
     {
