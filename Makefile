@@ -11,7 +11,7 @@ APT_PACKAGES := python3-ezdxf admesh poppler-utils nec2c
 TOOL_DIR := .tools
 VERSION := $(shell sed -n 's:.*<Version>\(.*\)</Version>.*:\1:p' Directory.Build.props)
 
-.PHONY: all build run test bench deps clean schema install validate
+.PHONY: all build run test bench deps clean schema install validate validate-smoke
 
 all: build
 
@@ -51,6 +51,17 @@ validate:
 	$(VALIDATE_PY) validate/element.py
 	$(VALIDATE_PY) validate/dipoles.py
 	$(VALIDATE_PY) validate/nec_check.py d24.0x0.5 d22.5x0.8
+
+# The same scripts end to end on the coarsest mesh and a few cases (about ten minutes on two cores),
+# into a scratch folder: proves the openEMS set-up works without touching the committed tables.
+SMOKE_TABLES ?= /tmp/helipol-fullwave-smoke
+validate-smoke:
+	@bash .ci/deps.sh $(VALIDATE_PACKAGES)
+	@mkdir -p $(SMOKE_TABLES)
+	FULLWAVE_TABLES=$(SMOKE_TABLES) LOADING_CASES=bare,tape-hug LOADING_CELLS=0.1 $(VALIDATE_PY) validate/loading.py
+	FULLWAVE_TABLES=$(SMOKE_TABLES) ELEMENT_CELLS=0.2,0.1 $(VALIDATE_PY) validate/element.py
+	FULLWAVE_TABLES=$(SMOKE_TABLES) DIPOLES_CASES=d22.5x0.8 DIPOLES_CELLS=0.2,0.1 $(VALIDATE_PY) validate/dipoles.py
+	@cat $(SMOKE_TABLES)/*.csv
 
 bench:
 	$(DOTNET) run --project tests/Helipol.Bench -c Release -- $(BENCH_ARGS)

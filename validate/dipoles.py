@@ -10,8 +10,7 @@ import fullwave as fw  # noqa: E402
 DIPOLES = [("d24.3x1.0", 24.3, 1.0), ("d22.5x0.8", 22.5, 0.8), ("d24.0x0.5", 24.0, 0.5)]
 ONLY = os.environ.get("DIPOLES_CASES")
 CELLS = [float(c) for c in os.environ.get("DIPOLES_CELLS", "0.1,0.05,0.025").split(",")]
-OUT = os.path.join(os.path.dirname(os.path.abspath(__file__)), "..", "docs", "fullwave",
-                   "dipoles.csv")
+OUT = os.path.join(fw.TABLES, "dipoles.csv")
 
 
 def main():

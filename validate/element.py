@@ -11,8 +11,7 @@ import fullwave as fw  # noqa: E402
 
 CASE, LENGTH, DIAMETER = "e22.5x0.8", 22.5, 0.8
 CELLS = [float(c) for c in os.environ.get("ELEMENT_CELLS", "0.1,0.05,0.025").split(",")]
-OUT = os.path.join(os.path.dirname(os.path.abspath(__file__)), "..", "docs", "fullwave",
-                   "element.csv")
+OUT = os.path.join(fw.TABLES, "element.csv")
 
 
 def main():

@@ -30,6 +30,10 @@ PML_CELLS = 8
 END_CRITERIA = 1e-4     # stop when the field energy has fallen 40 dB
 THREADS = int(os.environ.get("FULLWAVE_THREADS", "2"))
 WORK = os.environ.get("FULLWAVE_WORK", "/tmp/helipol-fullwave")
+# Where the tables go: the committed ones by default; the smoke run points this at a scratch folder
+# so that a short check never overwrites the committed figures.
+TABLES = os.environ.get("FULLWAVE_TABLES",
+                        os.path.join(os.path.dirname(os.path.abspath(__file__)), "..", "docs", "fullwave"))
 
 # Tape and foam of the loading cases (README "Dielectric surroundings").
 TAPE_T = 0.15

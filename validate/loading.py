@@ -11,8 +11,7 @@ LENGTH, DIAMETER = 24.0, 0.5
 CASES = ["bare", "sleeve", "foam", "tape-hug", "tape-tent-0.5", "tape-tent-1.0", "tape-hug-glue"]
 CASES = [c for c in os.environ.get("LOADING_CASES", ",".join(CASES)).split(",")]
 CELLS = [float(c) for c in os.environ.get("LOADING_CELLS", "0.05,0.025").split(",")]
-OUT = os.path.join(os.path.dirname(os.path.abspath(__file__)), "..", "docs", "fullwave",
-                   "loading.csv")
+OUT = os.path.join(fw.TABLES, "loading.csv")
 
 
 def main():
