@@ -14,19 +14,24 @@ import numpy as np
 CASES = {"d24.3x1.0": (24.3, 1.0), "d22.5x0.8": (22.5, 0.8), "d24.0x0.5": (24.0, 0.5)}
 
 
+def run_nec2c(deck):
+    """nec2c's printed output for a deck, and the frequencies (MHz) it ran, in order."""
+    with tempfile.TemporaryDirectory() as tmp:
+        inp, out = os.path.join(tmp, "deck.nec"), os.path.join(tmp, "deck.out")
+        with open(inp, "w") as fh:
+            fh.write(deck)
+        subprocess.run(["nec2c", "-i", inp, "-o", out], check=True, capture_output=True)
+        text = open(out).read()
+    return text, [float(m) for m in re.findall(r"FREQUENCY\s*[:=]\s*([0-9.E+-]+)\s*MHZ", text, re.I)]
+
+
 def impedances(length_mm, diameter_mm, segments, f_lo=5000.0, step=5.0, n=321):
     """(f MHz, R, X) from nec2c for the centre-fed straight wire."""
     h = length_mm / 2000.0
     deck = (f"CM straight centre-fed dipole\nCE\n"
             f"GW 1 {segments} 0 0 {-h:.6f} 0 0 {h:.6f} {diameter_mm / 2000.0:.6f}\nGE 0\n"
             f"EX 0 1 {segments // 2 + 1} 0 1 0\nFR 0 {n} 0 0 {f_lo:g} {step:g}\nXQ\nEN\n")
-    with tempfile.TemporaryDirectory() as tmp:
-        inp, out = os.path.join(tmp, "d.nec"), os.path.join(tmp, "d.out")
-        with open(inp, "w") as fh:
-            fh.write(deck)
-        subprocess.run(["nec2c", "-i", inp, "-o", out], check=True, capture_output=True)
-        text = open(out).read()
-    freqs = [float(m) for m in re.findall(r"FREQUENCY\s*[:=]\s*([0-9.E+-]+)\s*MHZ", text, re.I)]
+    text, freqs = run_nec2c(deck)
     zs = re.findall(r"ANTENNA INPUT PARAMETERS.*?\n.*?\n.*?\n\s*\d+\s+\d+\s+(\S+)\s+(\S+)\s+"
                     r"(\S+)\s+(\S+)\s+(\S+)\s+(\S+)", text, re.S)
     return [(f, float(z[4]), float(z[5])) for f, z in zip(freqs, zs)]
@@ -39,13 +44,7 @@ def element_peak(length_mm, diameter_mm, segments, f_lo=5300.0, step=5.0, n=201)
     deck = (f"CM straight unfed wire, plane wave\nCE\n"
             f"GW 1 {segments} 0 0 {-h:.6f} 0 0 {h:.6f} {diameter_mm / 2000.0:.6f}\nGE 0\n"
             f"EX 1 1 1 0 90 0 0\nFR 0 {n} 0 0 {f_lo:g} {step:g}\nXQ\nEN\n")
-    with tempfile.TemporaryDirectory() as tmp:
-        inp, out = os.path.join(tmp, "e.nec"), os.path.join(tmp, "e.out")
-        with open(inp, "w") as fh:
-            fh.write(deck)
-        subprocess.run(["nec2c", "-i", inp, "-o", out], check=True, capture_output=True)
-        text = open(out).read()
-    freqs = [float(m) for m in re.findall(r"FREQUENCY\s*[:=]\s*([0-9.E+-]+)\s*MHZ", text, re.I)]
+    text, freqs = run_nec2c(deck)
     centre = segments // 2 + 1
     row = rf"\n\s+{centre}\s+1\s+\S+\s+\S+\s+\S+\s+\S+\s+(\S+)\s+(\S+)"
     mags = np.array([math.hypot(float(a), float(b)) for a, b in re.findall(row, text)])
