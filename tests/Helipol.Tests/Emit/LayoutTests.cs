@@ -173,7 +173,7 @@ public class LayoutTests(ITestOutputHelper output)
             }
             foreach (var image in page.GetImages())
             {
-                var b = image.Bounds;
+                var b = image.BoundingBox;
                 Assert.True(b.Left >= margin && b.Right <= page.Width - margin && b.Bottom >= margin && b.Top <= page.Height - margin,
                     $"{name}: packet page {page.Number}: an image at ({b.Left / PtPerMm:0.0}, {b.Bottom / PtPerMm:0.0})-({b.Right / PtPerMm:0.0}, {b.Top / PtPerMm:0.0}) mm runs outside the printable area");
             }
