@@ -220,6 +220,23 @@ public static class ReportPlots
     {
         var plt = PlotStyle.NewPlot();
         int nl = map.LengthsM.Length, nh = map.RisesM.Length;
+        if (nl < 2 && nh < 2)
+        {
+            // Length and rise pinned: the "map" is a single cell, which a heat map draws as an
+            // empty frame. Say so instead.
+            plt.Axes.Frameless();
+            plt.HideGrid();
+            plt.Axes.SetLimits(-1, 1, -1, 1);
+            var note = plt.Add.Text(string.Create(System.Globalization.CultureInfo.InvariantCulture,
+                $"no map: element length and rise are pinned in the design\n({map.ElementCount} elements on {map.OuterDiameterM * 1e3:0.#} mm, one geometry scored)"), 0, 0);
+            note.LabelAlignment = Alignment.MiddleCenter;
+            note.LabelFontSize = 16;
+            note.LabelFontColor = Colors.Black;
+            note.LabelBackgroundColor = Colors.Transparent;
+            note.LabelBorderWidth = 0;
+            PlotStyle.Finish(plt, FormattableString.Invariant($"{name}: search objective map"));
+            return Png(plt, Width, Height, ImageFormat.Png);
+        }
         // Rows are drawn top to bottom: row 0 = highest rise.
         var data = new double[nh, nl];
         for (int i = 0; i < nl; i++)
