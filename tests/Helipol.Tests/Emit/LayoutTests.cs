@@ -145,6 +145,43 @@ public class LayoutTests(ITestOutputHelper output)
         }
     }
 
+    // Every drawn path (PdfPig's page paths: the content stream's path operators, in page space
+    // after the transformation matrix, cut to the clipping paths in force, as a viewer shows them:
+    // a tiled face is drawn whole and clipped to its tile) and every placed image of the packet must
+    // lie inside the printable area like the words do; half the line width is added, since a stroke
+    // spreads that far past its path. Clipping paths draw nothing and are left out.
+    [SkippableTheory]
+    [MemberData(nameof(Named))]
+    public void PacketDrawingsStayInsideThePrintableArea(string name)
+    {
+        var input = Input(name);
+        using var pdf = PdfDocument.Open(PacketPdf.Write(new PolarizerGeometry(input)), new ParsingOptions { ClipPaths = true });
+        var (wMm, hMm) = input.Paper == PaperSize.A4 ? (210.0, 297.0) : (215.9, 279.4);
+        var margin = PrintableMarginMm * PtPerMm;
+        int paths = 0;
+        foreach (var page in pdf.GetPages())
+        {
+            Assert.Equal(wMm * PtPerMm, page.Width, 0);
+            Assert.Equal(hMm * PtPerMm, page.Height, 0);
+            foreach (var path in page.Paths.Where(p => !p.IsClipping && (p.IsStroked || p.IsFilled)))
+            {
+                if (path.GetBoundingRectangle() is not { } b) continue;
+                paths++;
+                double half = path.IsStroked ? (double)path.LineWidth / 2 : 0;
+                Assert.True(b.Left - half >= margin && b.Right + half <= page.Width - margin && b.Bottom - half >= margin && b.Top + half <= page.Height - margin,
+                    $"{name}: packet page {page.Number}: a drawn path spanning ({b.Left / PtPerMm:0.0}, {b.Bottom / PtPerMm:0.0})-({b.Right / PtPerMm:0.0}, {b.Top / PtPerMm:0.0}) mm runs outside the printable area");
+            }
+            foreach (var image in page.GetImages())
+            {
+                var b = image.BoundingBox;
+                Assert.True(b.Left >= margin && b.Right <= page.Width - margin && b.Bottom >= margin && b.Top <= page.Height - margin,
+                    $"{name}: packet page {page.Number}: an image at ({b.Left / PtPerMm:0.0}, {b.Bottom / PtPerMm:0.0})-({b.Right / PtPerMm:0.0}, {b.Top / PtPerMm:0.0}) mm runs outside the printable area");
+            }
+        }
+        output.WriteLine($"{name}: {pdf.NumberOfPages} pages, {paths} drawn paths, all inside the printable area");
+        Assert.True(paths > 0, $"{name}: PdfPig found no drawn paths in the packet");
+    }
+
     // ezdxf's bounding box of each TEXT (fast mode: width = characters × height, descender below the
     // baseline), and each CUT entity's and BOARD rectangle's box.
     private const string Boxes = """

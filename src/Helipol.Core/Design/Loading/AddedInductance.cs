@@ -32,6 +32,17 @@ public static class AddedInductance
         return Cache.GetOrAdd(key, k => new Lazy<double>(() => Solve(k, DefaultAngularCells))).Value;
     }
 
+    /// <summary>
+    /// S for a cross-section solved as given, not rounded first (cached under the section itself,
+    /// which is again the input of its solve): the wrap interpolation's nodes sit at exact
+    /// multiples of an already rounded section's thickness.
+    /// </summary>
+    public static double ShapeFactorAsGiven(ElementCrossSection section)
+    {
+        if (section.IsAir) return 0;
+        return Cache.GetOrAdd(section, k => new Lazy<double>(() => Solve(k, DefaultAngularCells))).Value;
+    }
+
     /// <summary>L′ in H/m (cached).</summary>
     public static double HPerM(ElementCrossSection section) => PhysicalConstants.Mu0 / (2 * Math.PI) * ShapeFactor(section);
 

@@ -19,8 +19,11 @@ public sealed record LoadingSummary(double Factor, double PhysicsHPerM, double A
     public static LoadingSummary For(Surroundings s, double elementLengthM)
     {
         var section = s.Section;
-        double wrap = AddedInductance.ShapeFactor(section.WrapOnly), glue = AddedInductance.ShapeFactor(section.GlueOnly),
-            former = AddedInductance.ShapeFactor(section.FormerOnly);
+        // Three independent cold solves (each cached on its own key, so the order they finish in changes nothing).
+        var layers = new[] { section.WrapOnly, section.GlueOnly, section.FormerOnly };
+        var solved = new double[layers.Length];
+        Parallel.For(0, layers.Length, Parallelism.Options(), k => solved[k] = AddedInductance.ShapeFactor(layers[k]));
+        double wrap = solved[0], glue = solved[1], former = solved[2];
         double sum = wrap + glue + former;
         double Share(double x) => sum > 0 ? x / sum : 0;
         var coating = s.CoatingFor(section.WireRadiusM);

@@ -53,27 +53,8 @@ public sealed record Surroundings(ElementCrossSection Section, double Calibratio
     /// <summary>The same surroundings with the wrap <paramref name="scale"/> times as thick (tolerance analysis).</summary>
     public Surroundings WithWrapScaled(double scale) => this with { WrapScale = WrapScale * scale };
 
-    /// <summary>Step of wrap scale between solved sections; scales between are interpolated.</summary>
-    public const double WrapScaleStep = 0.1;
-
-    /// <summary>
-    /// S = L′/(μ0/2π) of the section with its wrap scaled. A scaled wrap is interpolated linearly
-    /// between sections solved at multiples of 10 % of the thickness: S varies smoothly (about as
-    /// ln of the thickness) and the Monte Carlo's random thicknesses then cost a handful of solves,
-    /// not one each.
-    /// </summary>
-    public double ShapeFactor
-    {
-        get
-        {
-            if (WrapScale == 1 || Section.WrapThicknessM <= 0) return AddedInductance.ShapeFactor(Section);
-            double x = WrapScale / WrapScaleStep;
-            int k = (int)Math.Floor(x);
-            double t = x - k;
-            double At(int m) => AddedInductance.ShapeFactor(Section with { WrapThicknessM = Section.WrapThicknessM * m * WrapScaleStep });
-            return t < 1e-9 ? At(k) : (1 - t) * At(k) + t * At(k + 1);
-        }
-    }
+    /// <summary>S = L′/(μ0/2π) of the section with its wrap scaled (interpolated between a few solved thicknesses, <see cref="WrapScaleInterpolation"/>).</summary>
+    public double ShapeFactor => WrapScaleInterpolation.ShapeFactor(Section, WrapScale);
 
     /// <summary>Added inductance per unit length, calibration included, H/m.</summary>
     public double AddedInductanceHPerM => CalibrationFactor * Helipol.Engine.PhysicalConstants.Mu0 / (2 * Math.PI) * ShapeFactor;

@@ -95,6 +95,7 @@ public static class ReportPlots
         plt.Axes.SetLimitsY(gainLow, AxisTop(gains.Max(), gainLow), plt.Axes.Right);
         bool clipped = arDb.Where((_, i) => wanted[i]).Any(a => a > arTop);
         plt.XLabel("frequency (MHz)");
+        PlainFrequencyTicks(plt);
         plt.YLabel("axial ratio (dB)");
         plt.Axes.Right.Label.Text = "gain (dBic)";
         // Negative gains with the true minus sign, like every other figure helipol prints.
@@ -137,6 +138,7 @@ public static class ReportPlots
         bool capped = sweep.Points.Any(p => !(p.Polarizer.Vswr <= VswrCap) || !(p.BareWhipVswr <= VswrCap));
         plt.Axes.SetLimitsY(1, Math.Min(AxisTop(top, 1), VswrCap + 5));
         plt.XLabel("frequency (MHz)");
+        PlainFrequencyTicks(plt);
         plt.YLabel(FormattableString.Invariant($"VSWR against {design.Solve.ReceiverOhm:0.#} Ω"));
         plt.ShowLegend(Alignment.UpperRight);
         PlotStyle.Finish(plt, FormattableString.Invariant($"{design.Name}: VSWR against {design.Solve.ReceiverOhm:0.#} Ω{(capped ? $" (values above {VswrCap:0} drawn at {VswrCap:0})" : "")}"));
@@ -218,6 +220,23 @@ public static class ReportPlots
     {
         var plt = PlotStyle.NewPlot();
         int nl = map.LengthsM.Length, nh = map.RisesM.Length;
+        if (nl < 2 && nh < 2)
+        {
+            // Length and rise pinned: the "map" is a single cell, which a heat map draws as an
+            // empty frame. Say so instead.
+            plt.Axes.Frameless();
+            plt.HideGrid();
+            plt.Axes.SetLimits(-1, 1, -1, 1);
+            var note = plt.Add.Text(string.Create(System.Globalization.CultureInfo.InvariantCulture,
+                $"no map: element length and rise are pinned in the design\n({map.ElementCount} elements on {map.OuterDiameterM * 1e3:0.#} mm, one geometry scored)"), 0, 0);
+            note.LabelAlignment = Alignment.MiddleCenter;
+            note.LabelFontSize = 16;
+            note.LabelFontColor = Colors.Black;
+            note.LabelBackgroundColor = Colors.Transparent;
+            note.LabelBorderWidth = 0;
+            PlotStyle.Finish(plt, FormattableString.Invariant($"{name}: search objective map"));
+            return Png(plt, Width, Height, ImageFormat.Png);
+        }
         // Rows are drawn top to bottom: row 0 = highest rise.
         var data = new double[nh, nl];
         for (int i = 0; i < nl; i++)
@@ -256,6 +275,11 @@ public static class ReportPlots
     public static double AxisTop(double max, double low) => Math.Ceiling((low + (max - low) * 1.35) / 5) * 5;
 
     /// <summary>The band's low and high edges as dashed bluish-green lines, one legend entry for both.</summary>
+    /// <summary>Frequency ticks as plain numbers (5100, not the charting library's grouped "5,100"):
+    /// the unit stands in the axis title.</summary>
+    private static void PlainFrequencyTicks(Plot plt) =>
+        plt.Axes.Bottom.TickGenerator = new ScottPlot.TickGenerators.NumericAutomatic { LabelFormatter = v => SignedNumber.Plain(v, "0.##") };
+
     private static void BandEdges(Plot plt, PolarizerDesign design)
     {
         bool first = true;

@@ -15,10 +15,11 @@ namespace Helipol.Tests.Design.Calibration;
 /// The whip and its polarizer are the pinned build of data/designs/tape-on-foam.yaml, written to
 /// NEC-2 segment for segment by <see cref="Nec2Deck"/>; the sweep, 4.5-8.5 GHz, takes in the loaded
 /// elements' own resonance, where the whip's reflection is most sensitive to their loading.
-/// Observed: the fit comes out about 15-20 nH/m above the true value at 60, 100 and 150 nH/m alike,
-/// a constant offset: the engine and NEC-2 place the bare elements' resonance about 1 % apart, and
-/// the bare-whip sweep cannot cancel an error in the elements themselves. At 60 nH/m that offset
-/// exceeds 20 %, so the cases here are the loadings of taped elements (100-150 nH/m).
+/// Observed on the end-capped engine: the fit comes out about 13 nH/m below the true value at 60,
+/// 100 and 150 nH/m alike (47.1, 87, 137 nH/m), a constant offset: the engine and NEC-2 still place
+/// the bare elements' resonance apart, and the bare-whip sweep cannot cancel an error in the
+/// elements themselves. (Before the end caps the offset was +15-20 nH/m.) At 60 nH/m it is 21.5 %,
+/// outside 20 %, so the cases here are the loadings of taped elements (100-150 nH/m).
 /// </summary>
 public class MeasurementCalibrationTests(ITestOutputHelper output)
 {
