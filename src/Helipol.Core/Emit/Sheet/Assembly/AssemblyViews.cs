@@ -26,8 +26,10 @@ internal static class AssemblyViews
         var whip = i.WhipLengthMm > 0 ? i.WhipLengthMm : 2 * i.FormerHeightMm;
         var dipole = i.Whip == WhipShape.Dipole;
         // The feed (dipole) or the ground (monopole) is height 0; the whip spans [-L/2, L/2] or [0, L].
-        var zMin = dipole ? -whip / 2 : 0;
-        var zMax = dipole ? whip / 2 : whip;
+        var whipBottom = dipole ? -whip / 2 : 0;
+        var whipTop = dipole ? whip / 2 : whip;
+        var zMin = whipBottom;
+        var zMax = whipTop;
         var formerBottom = i.CentreAboveFeedMm - i.FormerHeightMm / 2;
         zMin = Math.Min(zMin, formerBottom);
         zMax = Math.Max(zMax, formerBottom + i.FormerHeightMm);
@@ -53,6 +55,11 @@ internal static class AssemblyViews
         Helices(pen, g, cx, Y, s, front: false);
         pen.FillRect(cx - r, Y(formerBottom + i.FormerHeightMm), 2 * r, i.FormerHeightMm * s, Foam.WithAlpha(230));
         pen.Rect(cx - r, Y(formerBottom + i.FormerHeightMm), 2 * r, i.FormerHeightMm * s, 0.3);
+        // The whip inside the former as a hidden (dashed) line, the drafting convention, so that a whip
+        // the former covers whole (a short monopole) still shows where it runs.
+        var hiddenBottom = Math.Max(whipBottom, formerBottom);
+        var hiddenTop = Math.Min(whipTop, formerBottom + i.FormerHeightMm);
+        if (hiddenTop > hiddenBottom) pen.Line(cx, Y(hiddenBottom), cx, Y(hiddenTop), 0.3, SKColors.DimGray, dash: [1.2f, 0.8f]);
         Helices(pen, g, cx, Y, s, front: true);
         // Dimension from the feed to the former's bottom face.
         var dx = cx + r + 3;
