@@ -1,5 +1,6 @@
 using Helipol.Design;
 using Helipol.Model;
+using Helipol.Pipeline;
 using Helipol.Spec;
 using Spectre.Console;
 
@@ -9,32 +10,19 @@ namespace Helipol.Cli;
 public static class SolveRunner
 {
     /// <summary>Solves, or throws <see cref="DesignRefusedException"/> with one line when the design cannot be solved.</summary>
-    public static SolvedPolarizer Solve(CliConsole console, PolarizerDesign design, FieldSolveCounter counter)
-    {
-        try
-        {
-            return SolveOnce(console, design, counter);
-        }
-        catch (SearchException ex)
-        {
-            throw new DesignRefusedException(DesignRefusal.SearchLine(design, ex));
-        }
-        catch (Helipol.Engine.ModelException ex)
-        {
-            throw new DesignRefusedException($"{design.SourceFile}: polarizer: found a geometry the field model refuses ({ex.Message}), allowed wires that do not touch and are thin enough");
-        }
-    }
+    public static SolvedPolarizer Solve(CliConsole console, PolarizerDesign design, FieldSolveCounter counter) =>
+        WithStatus(console, design, progress => DesignPipeline.Solve(design, counter, progress));
 
-    private static SolvedPolarizer SolveOnce(CliConsole console, PolarizerDesign design, FieldSolveCounter counter)
+    /// <summary>Runs <paramref name="work"/> under a "solving" status line on an interactive terminal, fed by its progress.</summary>
+    public static T WithStatus<T>(CliConsole console, PolarizerDesign design, Func<IProgress<string>?, T> work)
     {
-        SolvedPolarizer? solved = null;
-        if (console.Tables.Profile.Capabilities.Interactive)
-            console.Tables.Status().Start($"solving {design.Name}", ctx =>
-            {
-                solved = PolarizerSolver.Solve(design, counter, new Progress<string>(s => ctx.Status(Markup.Escape(s))));
-            });
-        else solved = PolarizerSolver.Solve(design, counter);
-        return solved!;
+        if (!console.Tables.Profile.Capabilities.Interactive) return work(null);
+        T result = default!;
+        console.Tables.Status().Start($"solving {design.Name}", ctx =>
+        {
+            result = work(new Progress<string>(s => ctx.Status(Markup.Escape(s))));
+        });
+        return result;
     }
 
     /// <summary>Error line for a verb that needs a pinned geometry (file:line:column: key: found auto, allowed ...).</summary>

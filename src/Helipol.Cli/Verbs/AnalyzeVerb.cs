@@ -7,6 +7,7 @@ using Helipol.Design;
 using Helipol.Emit.Report;
 using Helipol.Engine;
 using Helipol.Model;
+using Helipol.Pipeline;
 using Helipol.Spec;
 using Spectre.Console;
 

@@ -2,23 +2,26 @@ using Helipol.Design;
 using Helipol.Model;
 using Helipol.Spec;
 
-namespace Helipol.Cli;
+namespace Helipol.Pipeline;
 
 /// <summary>
-/// A design the solver cannot work on (bad input, exit 2), raised with its one printable line;
-/// <see cref="CliApp"/> prints the line and returns <see cref="ExitCodes.BadInput"/>.
+/// A design the solver cannot work on (bad input), raised with its one printable line
+/// (file:line:column or file, the key, what was found, what is allowed).
 /// </summary>
 public sealed class DesignRefusedException(string line) : Exception(line);
 
 /// <summary>The pre-solve guard as a verb shows it: one error line at the key to change, or null.</summary>
 public static class DesignRefusal
 {
-    public static string? LineFor(PolarizerDesign design, SpecDocument? doc = null)
+    public static string? LineFor(PolarizerDesign design, SpecDocument? doc = null) => ErrorFor(design, doc)?.ToString();
+
+    /// <summary>The guard's refusal at the key's place in <paramref name="doc"/> (read again from the design's file when not given).</summary>
+    public static SpecError? ErrorFor(PolarizerDesign design, SpecDocument? doc = null)
     {
         if (ModelGuard.Refusal(design, CoatingCalibration.For(design).Factor) is not { } refusal) return null;
         doc ??= SpecReader.ReadFile(design.SourceFile, design.SourceFile);
         var mark = doc.Find(refusal.KeyPath)?.Mark ?? SourceMark.FileStart;
-        return new SpecError(design.SourceFile, mark, refusal.KeyPath, refusal.Found, refusal.Allowed).ToString();
+        return new SpecError(design.SourceFile, mark, refusal.KeyPath, refusal.Found, refusal.Allowed);
     }
 
     /// <summary>The line for a search that found nothing it could build.</summary>
