@@ -96,7 +96,7 @@ public static class AnalyzeVerb
             bool windingChosen = false;
             try
             {
-                build = solvedBuild ?? SolveRunner.AnalysisBuild(design, cone, out practiceKeys, out windingChosen);
+                build = solvedBuild ?? AnalysisGeometry.For(design, cone, out practiceKeys, out windingChosen);
                 result = Evaluate(build, freqs!, cone, window, design);
             }
             catch (ModelException ex)

@@ -27,4 +27,13 @@ public static class DesignRefusal
     /// <summary>The line for a search that found nothing it could build.</summary>
     public static string SearchLine(PolarizerDesign design, SearchException ex) =>
         $"{design.SourceFile}: polarizer: found {ex.Message}, allowed a search range with buildable geometry (widen solve.search or the former)";
+
+    /// <summary>Error line for a verb that needs a pinned geometry (file:line:column: key: found auto, allowed ...).</summary>
+    public static string PinnedError(PolarizerDesign design, string keyPath)
+    {
+        var doc = SpecReader.ReadFile(design.SourceFile, design.SourceFile);
+        var mark = doc.Find(keyPath)?.Mark;
+        return new SpecError(design.SourceFile, mark ?? SourceMark.FileStart, keyPath, "auto",
+            "a pinned value (this verb evaluates the geometry as written; run 'helipol solve' to choose it)").ToString();
+    }
 }
