@@ -1,5 +1,6 @@
 using System.CommandLine;
 using Helipol.Cli.Verbs;
+using Helipol.Pipeline;
 using Helipol.Spec;
 
 namespace Helipol.Cli;

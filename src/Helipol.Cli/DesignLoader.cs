@@ -1,5 +1,5 @@
 using Helipol.Model;
-using Helipol.Spec;
+using Helipol.Pipeline;
 
 namespace Helipol.Cli;
 
@@ -16,22 +16,10 @@ public static class DesignLoader
         var bad = false;
         foreach (var file in files)
         {
-            try
-            {
-                var design = DesignResolver.ReadFile(file, file);
-                if (DesignRefusal.LineFor(design) is { } refused)
-                {
-                    console.Error.WriteLine(refused);
-                    bad = true;
-                    continue;
-                }
-                designs.Add(design);
-            }
-            catch (DesignInputException ex)
-            {
-                foreach (var problem in ex.Errors) console.Error.WriteLine(problem.ToString());
-                bad = true;
-            }
+            var load = DesignSource.FromFile(file, file);
+            foreach (var problem in load.Problems) console.Error.WriteLine(problem.ToString());
+            if (load.Design is { } design) designs.Add(design);
+            else bad = true;
         }
         return bad ? null : designs;
     }

@@ -13,9 +13,11 @@ public static class VerdictOutput
     /// <summary>Exit code of <c>build --strict</c> when a design's verdict is <c>fails</c>.</summary>
     public const int FailsExitCode = 3;
 
-    public static DesignVerdict Show(CliConsole console, PolarizerDesign design, SolvedPolarizer solved, ToleranceResult? tolerance, bool stdoutIsJson)
+    public static DesignVerdict Show(CliConsole console, PolarizerDesign design, SolvedPolarizer solved, ToleranceResult? tolerance, bool stdoutIsJson) =>
+        Show(console, design, VerdictJudge.For(design, solved, tolerance), stdoutIsJson);
+
+    public static DesignVerdict Show(CliConsole console, PolarizerDesign design, DesignVerdict verdict, bool stdoutIsJson)
     {
-        var verdict = VerdictJudge.For(design, solved, tolerance);
         (stdoutIsJson ? console.Error : console.Out).WriteLine($"verdict {verdict.Line(design.Name)}");
         if (verdict.Grade == Grade.Fails)
             console.Error.WriteLine($"helipol: warning: {design.Name} FAILS: it will not work as designed in {Band(design)} ({verdict.Reasons[0]}); next: {verdict.NextStep}");

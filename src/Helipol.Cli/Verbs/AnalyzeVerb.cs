@@ -7,6 +7,7 @@ using Helipol.Design;
 using Helipol.Emit.Report;
 using Helipol.Engine;
 using Helipol.Model;
+using Helipol.Pipeline;
 using Helipol.Spec;
 using Spectre.Console;
 
@@ -95,7 +96,7 @@ public static class AnalyzeVerb
             bool windingChosen = false;
             try
             {
-                build = solvedBuild ?? SolveRunner.AnalysisBuild(design, cone, out practiceKeys, out windingChosen);
+                build = solvedBuild ?? AnalysisGeometry.For(design, cone, out practiceKeys, out windingChosen);
                 result = Evaluate(build, freqs!, cone, window, design);
             }
             catch (ModelException ex)

@@ -2,6 +2,7 @@ using System.CommandLine;
 using System.Globalization;
 using Helipol.Design;
 using Helipol.Emit;
+using Helipol.Pipeline;
 using Helipol.Spec;
 
 namespace Helipol.Cli.Verbs;
@@ -90,7 +91,7 @@ public static class CalibrateVerb
             }
             catch (PinnedLayoutException ex)
             {
-                console.Error.WriteLine(SolveRunner.PinnedError(design, ex.KeyPath));
+                console.Error.WriteLine(DesignRefusal.PinnedError(design, ex.KeyPath));
                 return ExitCodes.BadInput;
             }
             var folder = Path.GetDirectoryName(Path.GetFullPath(design.SourceFile)) ?? ".";

@@ -1,5 +1,6 @@
 using System.CommandLine;
 using Helipol.Model;
+using Helipol.Pipeline;
 using Helipol.Spec;
 
 namespace Helipol.Cli.Verbs;

@@ -2,6 +2,7 @@ using System.CommandLine;
 using System.Globalization;
 using Helipol.Emit;
 using Helipol.Model;
+using Helipol.Pipeline;
 using Helipol.Spec;
 using Helipol.Spec.Fields;
 

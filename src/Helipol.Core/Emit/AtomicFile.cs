@@ -11,10 +11,10 @@ namespace Helipol.Emit;
 public static class AtomicFile
 {
     /// <summary>
-    /// Test hook: milliseconds to sleep after the temporary files are complete and before they are
-    /// renamed over their targets. Lets a test kill the process mid-write and find the targets intact.
+    /// Test seam: runs after every temporary file of a set is complete and before any is renamed over
+    /// its target, for the whole process. A test holds a child build here to kill it mid-write.
     /// </summary>
-    public const string PauseVariable = "HELIPOL_TEST_PAUSE_MS";
+    internal static Action? BeforeRenames;
 
     private static readonly AsyncLocal<Func<Stream, Stream>?> WrapStream = new();
 
@@ -58,7 +58,7 @@ public static class AtomicFile
                     file.Flush(flushToDisk: true);
                 }
             }
-            PauseForTest();
+            BeforeRenames?.Invoke();
             foreach (var (temp, full) in staged)
             {
                 current = full;
@@ -74,13 +74,6 @@ public static class AtomicFile
 
     public static void WriteAllText(string path, string text) =>
         WriteAllBytes(path, new System.Text.UTF8Encoding(encoderShouldEmitUTF8Identifier: false).GetBytes(text));
-
-    private static void PauseForTest()
-    {
-        var value = Environment.GetEnvironmentVariable(PauseVariable);
-        if (value is not null && int.TryParse(value, NumberStyles.None, CultureInfo.InvariantCulture, out var ms) && ms > 0)
-            Thread.Sleep(ms);
-    }
 
     /// <summary>
     /// A run killed between its two phases leaves ".NAME.partial-PID" beside NAME. They never stand

@@ -28,8 +28,12 @@ public sealed record Band(double CenterHz, double LowHz, double HighHz, bool Edg
     /// <summary>Default half-width of the band when the file gives only the center (the project's stated default).</summary>
     public const double DefaultHalfWidthFraction = 0.015;
 
+    /// <summary>Speed of light in vacuum, exact by the SI definition of the metre (SI Brochure, 9th ed., 2019).
+    /// Held here too because the model layer comes before the engine and may not use it.</summary>
+    public const double SpeedOfLightMPerS = 299_792_458.0;
+
     /// <summary>Free-space wavelength at the centre, λ = c/f.</summary>
-    public double WavelengthM => Helipol.Engine.PhysicalConstants.SpeedOfLight / CenterHz;
+    public double WavelengthM => SpeedOfLightMPerS / CenterHz;
 }
 
 public sealed record Whip(WhipKind Kind, double LengthM, double DiameterM, double? CoverDiameterM)

@@ -35,7 +35,7 @@ internal static class CliProcess
             psi.ArgumentList.Add(CliDll);
         }
         foreach (var a in args) psi.ArgumentList.Add(a);
-        foreach (var name in new[] { "HELIPOL_THREADS", "HELIPOL_DEBUG", "HELIPOL_TEST_PAUSE_MS", "LANG", "LC_ALL" })
+        foreach (var name in new[] { "HELIPOL_THREADS", "HELIPOL_DEBUG", StartupHook.PauseVariable, "DOTNET_STARTUP_HOOKS", "LANG", "LC_ALL" })
             psi.Environment.Remove(name);
         foreach (var (k, v) in env) psi.Environment[k] = v;
         return psi;

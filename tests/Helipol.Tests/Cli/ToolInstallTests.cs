@@ -53,7 +53,7 @@ public class ToolInstallTests
     {
         var psi = new ProcessStartInfo(program) { WorkingDirectory = folder, RedirectStandardOutput = true, RedirectStandardError = true, UseShellExecute = false };
         foreach (var a in args) psi.ArgumentList.Add(a);
-        foreach (var name in new[] { "HELIPOL_THREADS", "HELIPOL_DEBUG", "HELIPOL_TEST_PAUSE_MS" }) psi.Environment.Remove(name);
+        foreach (var name in new[] { "HELIPOL_THREADS", "HELIPOL_DEBUG", StartupHook.PauseVariable, "DOTNET_STARTUP_HOOKS" }) psi.Environment.Remove(name);
         psi.Environment["DOTNET_CLI_TELEMETRY_OPTOUT"] = "1";
         psi.Environment["DOTNET_NOLOGO"] = "1";
         using var p = Process.Start(psi) ?? throw new InvalidOperationException($"could not start {program}");

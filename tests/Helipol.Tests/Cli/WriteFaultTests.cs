@@ -128,8 +128,8 @@ public class WriteFaultTests
             var before = Snapshot(output);
             var changed = ChangedCopy(folder);
 
-            // The pause hook holds the child after every temporary file is written, before any rename.
-            var env = new Dictionary<string, string> { [AtomicFile.PauseVariable] = "60000" };
+            // The startup hook holds the child after every temporary file is written, before any rename.
+            var env = StartupHook.PausingChild(60000);
             using (var child = Process.Start(CliProcess.StartInfo(env, null, "build", changed, "-o", output))!)
             {
                 var last = Path.Combine(output, "quick-build", $".packet.pdf.partial-{child.Id}");
