@@ -1,3 +1,5 @@
+using Helipol.Model;
+
 namespace Helipol.Geometry;
 
 /// <summary>
@@ -35,7 +37,7 @@ public sealed record FormerSleeve(
         var width = d + i.PrintClearanceMm;
         // Horizontal half-width of a band of perpendicular width W that climbs at pitch ψ is
         // (W/2)/sin ψ; ψ here is the helix's pitch on the floor cylinder.
-        var psiFloor = Math.Atan2(i.ElementRiseMm, g.ArcAngleRad * floor);
+        var psiFloor = HelixArc.PitchAngleRad(i.ElementRiseMm, g.ArcAngleRad * floor);
         var halfWidthRad = width / 2 / Math.Sin(psiFloor) / floor;
         var taperRad = GrooveWallTaperMm / floor;
         var pitchRad = 2 * Math.PI / i.ElementCount;

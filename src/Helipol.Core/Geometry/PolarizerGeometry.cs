@@ -1,3 +1,5 @@
+using Helipol.Model;
+
 namespace Helipol.Geometry;
 
 /// <summary>
@@ -35,9 +37,9 @@ public sealed class PolarizerGeometry
         var L = input.ElementLengthMm;
         var h = input.ElementRiseMm;
         ElementAxisRadiusMm = input.FormerOuterDiameterMm / 2 + input.WireDiameterMm / 2;
-        HorizontalArcLengthMm = Math.Sqrt(L * L - h * h);
+        HorizontalArcLengthMm = HelixArc.Run(L, h);
         ArcAngleRad = HorizontalArcLengthMm / ElementAxisRadiusMm;
-        PitchAngleRad = Math.Atan2(h, HorizontalArcLengthMm);
+        PitchAngleRad = HelixArc.PitchAngleRad(h, HorizontalArcLengthMm);
         var risePerRad = h / ArcAngleRad;
         BendRadiusMm = (ElementAxisRadiusMm * ElementAxisRadiusMm + risePerRad * risePerRad) / ElementAxisRadiusMm;
         var lower = input.CentreHeightMm - h / 2;

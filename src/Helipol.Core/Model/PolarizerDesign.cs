@@ -106,12 +106,12 @@ public sealed record ElementLayout(int Count, double LengthM, double RiseM, doub
     public double AxisRadiusM => OuterDiameterM / 2 + WireDiameterM / 2;
 
     /// <summary>Length of the element's projection on the horizontal plane (the unrolled arc).</summary>
-    public double ArcLengthM => Math.Sqrt(Math.Max(0, LengthM * LengthM - RiseM * RiseM));
+    public double ArcLengthM => HelixArc.Run(LengthM, RiseM);
 
     public double ArcAngleRad => ArcLengthM / AxisRadiusM;
 
     /// <summary>Angle of the wire above the horizontal: atan(rise / arc length).</summary>
-    public double PitchAngleRad => Math.Atan2(RiseM, ArcLengthM);
+    public double PitchAngleRad => HelixArc.PitchAngleRad(RiseM, ArcLengthM);
 
     /// <summary>Azimuth where element k (0-based) starts.</summary>
     public double StartAzimuthRad(int k) => 2 * Math.PI * k / Count;

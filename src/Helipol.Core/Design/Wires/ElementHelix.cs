@@ -6,7 +6,7 @@ namespace Helipol.Design;
 /// <summary>
 /// The wire path of one element by the geometry convention: a helical arc on the cylinder of radius
 /// R (the wire axis on the former surface), total wire length L, climbing h, centred at height
-/// z_c, starting (lower end) at azimuth φ0. Its arc angle is sqrt(L² − h²)/R. Right winding: the
+/// z_c, starting (lower end) at azimuth φ0. Its arc angle is sqrt(L² − h²)/R (<see cref="HelixArc"/>). Right winding: the
 /// azimuth increases as the element rises; left: it decreases.
 /// </summary>
 public static class ElementHelix
@@ -20,7 +20,7 @@ public static class ElementHelix
     /// </summary>
     public static Vector3[] Points(ElementPlacement e, double axisRadiusM, double centreHeightM, Winding winding, int edges)
     {
-        double run = Math.Sqrt(Math.Max(0, e.LengthM * e.LengthM - e.RiseM * e.RiseM));
+        double run = HelixArc.Run(e.LengthM, e.RiseM);
         double arc = run / axisRadiusM * (winding == Winding.Left ? -1 : 1);
         var points = new Vector3[edges + 1];
         for (int i = 0; i <= edges; i++)
@@ -42,7 +42,7 @@ public static class ElementHelix
     public static int EdgeCount(ElementPlacement e, double axisRadiusM, double wireRadiusM, double maxFrequencyHz, SegmentationOptions options)
     {
         double target = PhysicalConstants.SpeedOfLight / maxFrequencyHz / options.SegmentsPerWavelength;
-        double run = Math.Sqrt(Math.Max(0, e.LengthM * e.LengthM - e.RiseM * e.RiseM));
+        double run = HelixArc.Run(e.LengthM, e.RiseM);
         int wanted = Math.Max(options.MinimumSegmentsPerWire,
             Math.Max((int)Math.Ceiling(e.LengthM / target - 1e-9), (int)Math.Ceiling(run / axisRadiusM / MaxStepRad - 1e-9)));
         int allowed = (int)Math.Floor(e.LengthM / (options.MinimumLengthInRadii * wireRadiusM * 1.01));
