@@ -1,3 +1,5 @@
+using Helipol.Model;
+
 namespace Helipol.Geometry;
 
 /// <summary>
@@ -10,10 +12,10 @@ namespace Helipol.Geometry;
 /// </summary>
 public static class RingTemplates
 {
-    /// <summary>Space round a ring's contour for the element numbers, mm.</summary>
-    public const double LabelMarginMm = 5.0;
+    /// <summary>Space round a ring's contour for the element numbers, mm (<see cref="RingBoardLayout"/>).</summary>
+    public const double LabelMarginMm = RingBoardLayout.LabelMarginMm;
     /// <summary>Band under each view for its ring number, design name and element-end note, mm.</summary>
-    public const double TextBandMm = 11.0;
+    public const double TextBandMm = RingBoardLayout.TextBandMm;
     /// <summary>Radius of the circle that marks an element's end, mm.</summary>
     public const double EndMarkRadiusMm = 0.6;
 
@@ -29,7 +31,7 @@ public static class RingTemplates
     public const double NotchDepthMm = 1.5;
     public const double NotchHalfWidthMm = 1.0;
     /// <summary>Margin inside the board edge, mm.</summary>
-    public const double BoardMarginMm = 5.0;
+    public const double BoardMarginMm = RingBoardLayout.BoardMarginMm;
     /// <summary>Gap between boards when the rings need more than one, mm.</summary>
     public const double BoardGapMm = 20.0;
 

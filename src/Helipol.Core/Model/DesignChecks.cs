@@ -8,18 +8,11 @@ namespace Helipol.Model;
 /// </summary>
 public static class DesignChecks
 {
-    /// <summary>Margin round a ring's contour for its element numbers, mm (the ring templates' layout).</summary>
-    public const double RingLabelMarginMm = 5.0;
-    /// <summary>Band under each ring for its number and the design name, mm.</summary>
-    public const double RingTextBandMm = 11.0;
-    /// <summary>Margin inside the board's edge, mm.</summary>
-    public const double BoardEdgeMarginMm = 5.0;
-
     /// <summary>Smallest board (width, height) in mm that holds one ring of this outer diameter.</summary>
     public static (double WidthMm, double HeightMm) BoardNeededMm(double outerDiameterMm, double kerfMm)
     {
-        var cell = outerDiameterMm + kerfMm + 2 * RingLabelMarginMm;
-        return (cell + 2 * BoardEdgeMarginMm, cell + RingTextBandMm + 2 * BoardEdgeMarginMm);
+        var cell = outerDiameterMm + kerfMm + 2 * RingBoardLayout.LabelMarginMm;
+        return (cell + 2 * RingBoardLayout.BoardMarginMm, cell + RingBoardLayout.TextBandMm + 2 * RingBoardLayout.BoardMarginMm);
     }
 
     public static void Check(SpecDocument doc, PolarizerDesign design, SpecErrors errors)
@@ -78,7 +71,7 @@ public static class DesignChecks
 
         // A former must fit on the board it is cut from, as the ring templates nest it: the ring
         // with half a kerf and a label margin round it, a text band under it, inside the board's
-        // margins (Geometry/RingTemplates.cs; a test keeps the two equal). An auto former may be
+        // margins (RingBoardLayout, which Geometry/RingTemplates.cs draws with). An auto former may be
         // searched up to the top of its range.
         var outerMm = (former.OuterDiameterM ?? design.Solve.Search.OuterDiameterMaxM) * 1e3;
         var (needWidthMm, needHeightMm) = BoardNeededMm(outerMm, design.Fabrication.KerfMm);
