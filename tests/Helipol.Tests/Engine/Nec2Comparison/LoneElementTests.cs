@@ -7,9 +7,9 @@ namespace Helipol.Tests.Engine.Nec2Comparison;
 /// Broadside resonance of lone straight wires (<see cref="LoneElement"/>), the engine at its default
 /// segmentation against NEC-2 with the extended thin-wire kernel (Debian nec2c 1.3, EK card; the NEC-2
 /// user's guide recommends it for thick wires), whose end condition carries the charge on flat caps.
-/// The wires are the full-wave reference cases of docs/fullwave/README.md. FDTD (openEMS) with
-/// extrapolation to zero cell size gave 5788 ± 15 MHz, 5324 and 5572 MHz for them (the project's
-/// issue 11 check), within about 0.1 % of NEC-2's extended kernel.
+/// The wires are the full-wave reference cases of docs/fullwave/README.md; the project's own FDTD
+/// table for the first (docs/fullwave/element.csv, 5816.8 MHz extrapolated) is checked in
+/// Engine/FullWave/FullWaveTableTests.
 /// Observed, engine at default segmentation (30 per λ, end caps, tube kernel) vs NEC-2 EK at 21
 /// segments: 22.5 × 0.8 mm 5787.8 vs 5792.4 MHz; 24.3 × 1.0 mm 5298.8 vs 5320.9 MHz; 24.0 × 0.5 mm
 /// 5582.5 vs 5572.1 MHz. Before (20 per λ, reduced kernel only, no end caps) the first was 5888 MHz.
