@@ -118,7 +118,7 @@ public static class AnalyzeVerb
                 if (note is not null) console.Out.WriteLine(note);
                 Table(console, design, build, elevationRad, result, source);
                 if (windingChosen)
-                    console.Out.WriteLine("polarizer.winding: auto in the file; the winding that radiates the wanted sense better at the band centre was taken.");
+                    console.Out.WriteLine($"{Keys.PolarizerWinding}: auto in the file; the winding that radiates the wanted sense better at the band centre was taken.");
             }
             return ExitCodes.Ok;
         });

@@ -29,7 +29,7 @@ public static class NewVerb
             var designName = parse.GetValue(name)!;
             var probe = new ReadContext("--center", ".");
             new QuantityField(QuantityKind.Frequency, DesignKeys.LowestFrequencyHz, DesignKeys.HighestFrequencyHz, minInclusive: true)
-                .Read(new YamlScalar(SourceMark.FileStart, parse.GetValue(center)!, true), "band.center", probe);
+                .Read(new YamlScalar(SourceMark.FileStart, parse.GetValue(center)!, true), Keys.BandCenter, probe);
             new TextField("^[A-Za-z0-9_-]+$", "letters, digits, - and _ only", 64)
                 .Read(new YamlScalar(SourceMark.FileStart, designName, true), "name", probe);
             if (probe.Errors.Count > 0)
@@ -38,7 +38,7 @@ public static class NewVerb
                 console.Error.WriteLine($"helipol new: {first.FieldPath}: found {first.Found}, allowed {first.Allowed}");
                 return ExitCodes.BadInput;
             }
-            var centerHz = ((QuantityValue)probe.Values["band.center"]).Si;
+            var centerHz = ((QuantityValue)probe.Values[Keys.BandCenter]).Si;
             var folderPath = parse.GetValue(folder)!;
             var target = Path.Combine(folderPath, designName + ".yaml");
             if (File.Exists(target) || Directory.Exists(target))

@@ -2,6 +2,7 @@ using System.CommandLine;
 using System.Globalization;
 using Helipol.Design;
 using Helipol.Emit.Report;
+using Helipol.Model;
 using Helipol.Spec;
 using Spectre.Console;
 
@@ -16,7 +17,7 @@ public static class SweepVerb
     public static Command Create(CliConsole console)
     {
         var file = new Argument<string>("FILE") { Description = "design file (.yaml)" };
-        var points = new Option<int?>("--points") { Description = "frequencies in the sweep (default solve.sweep.points, 101)" };
+        var points = new Option<int?>("--points") { Description = $"frequencies in the sweep (default {Keys.SolveSweepPoints}, 101)" };
         var json = new Option<bool>("--json") { Description = "print design.json with the solved values and the sweep" };
         var command = new Command("sweep", "Solve, then sweep the solution over the band: axial-ratio bandwidth, gains, impedance, VSWR with and without the polarizer.") { file, points, json };
         command.SetAction(parse =>
@@ -26,7 +27,7 @@ public static class SweepVerb
             var design = designs[0];
             if (parse.GetValue(points) is { } n && (n < DesignKeys.MinSweepPoints || n > DesignKeys.MaxSweepPoints))
             {
-                console.Error.WriteLine(string.Create(CultureInfo.InvariantCulture, $"helipol sweep: --points: found {n}, allowed {DesignKeys.MinSweepPoints} to {DesignKeys.MaxSweepPoints} (as solve.sweep.points)"));
+                console.Error.WriteLine(string.Create(CultureInfo.InvariantCulture, $"helipol sweep: --points: found {n}, allowed {DesignKeys.MinSweepPoints} to {DesignKeys.MaxSweepPoints} (as {Keys.SolveSweepPoints})"));
                 return ExitCodes.BadInput;
             }
             var counter = new FieldSolveCounter();

@@ -2,6 +2,7 @@ using System.CommandLine;
 using System.Globalization;
 using Helipol.Design;
 using Helipol.Emit.Report;
+using Helipol.Model;
 
 namespace Helipol.Cli.Verbs;
 
@@ -14,7 +15,7 @@ public static class ToleranceVerb
     public static Command Create(CliConsole console)
     {
         var file = new Argument<string>("FILE") { Description = "design file (.yaml)" };
-        var builds = new Option<int?>("--builds") { Description = "simulated builds (default tolerance.builds, 500)" };
+        var builds = new Option<int?>("--builds") { Description = $"simulated builds (default {Keys.ToleranceBuilds}, 500)" };
         var json = new Option<bool>("--json") { Description = "print design.json with the solved values and the tolerance analysis" };
         var command = new Command("tolerance", "Solve, then estimate the yield of hand-made builds and how sensitive the result is to length and rise.") { file, builds, json };
         command.SetAction(parse =>

@@ -22,7 +22,7 @@ public static class ModelGuard
         string Mm(double m) => (m * 1e3).ToString("0.###", CultureInfo.InvariantCulture) + " mm";
 
         if (p.Former.OuterDiameterM is null && design.Solve.Search.OuterDiameterMaxM <= p.Former.BoreM + 2 * p.Wire.DiameterM)
-            return ("solve.search.outer_diameter", $"a largest former of {Mm(design.Solve.Search.OuterDiameterMaxM)}",
+            return (Keys.SolveSearchOuterDiameter, $"a largest former of {Mm(design.Solve.Search.OuterDiameterMaxM)}",
                 $"more than bore + 2 × wire diameter ({Mm(p.Former.BoreM + 2 * p.Wire.DiameterM)}) so the elements sit outside the cover");
 
         if (p.ElementCount is null || p.ElementLengthM is null || p.ElementRiseM is null || p.Former.OuterDiameterM is null)
@@ -54,23 +54,23 @@ public static class ModelGuard
     private static string MeshKey(PolarizerDesign design, IReadOnlyList<int> wires)
     {
         var p = design.Polarizer;
-        if (wires.Count == 1 && wires[0] == 0) return "whip.diameter";
-        if (wires.Contains(0)) return "polarizer.former.bore";
+        if (wires.Count == 1 && wires[0] == 0) return Keys.WhipDiameter;
+        if (wires.Contains(0)) return Keys.PolarizerFormerBore;
         if (wires.Count == 1)
         {
             var nearGround = design.Whip.Kind == WhipKind.Monopole && p.CentreHeightM - (p.ElementRiseM ?? 0) / 2 < 2 * p.Wire.RadiusM;
-            return nearGround ? "polarizer.centre_height" : "polarizer.wire.diameter";
+            return nearGround ? Keys.PolarizerCentreHeight : Keys.PolarizerWireDiameter;
         }
-        return "polarizer.element_length";
+        return Keys.PolarizerElementLength;
     }
 
     /// <summary>The key a user would change for a layout outside the fabrication limits.</summary>
     private static string ViolationKey(PolarizerDesign design, FabricationViolation violation) => violation.Cause switch
     {
-        FabricationCause.Rise => "polarizer.element_rise",
-        FabricationCause.Wire => "polarizer.wire.diameter",
-        FabricationCause.Ground => "polarizer.centre_height",
-        _ => "polarizer.element_length",
+        FabricationCause.Rise => Keys.PolarizerElementRise,
+        FabricationCause.Wire => Keys.PolarizerWireDiameter,
+        FabricationCause.Ground => Keys.PolarizerCentreHeight,
+        _ => Keys.PolarizerElementLength,
     };
 
     /// <summary>The highest frequency any verb solves: the top of the reported sweep.</summary>

@@ -12,11 +12,11 @@ public static class PinnedLayout
     public static ElementLayout Require(PolarizerDesign design)
     {
         var p = design.Polarizer;
-        string? auto = p.ElementLengthM is null ? "polarizer.element_length"
-            : p.ElementRiseM is null ? "polarizer.element_rise"
-            : p.ElementCount is null ? "polarizer.elements"
-            : p.Former.OuterDiameterM is null ? "polarizer.former.outer_diameter" : null;
-        if (auto is not null) throw new PinnedLayoutException(auto);
+        DesignKey? auto = p.ElementLengthM is null ? Keys.PolarizerElementLength
+            : p.ElementRiseM is null ? Keys.PolarizerElementRise
+            : p.ElementCount is null ? Keys.PolarizerElements
+            : p.Former.OuterDiameterM is null ? Keys.PolarizerFormerOuterDiameter : null;
+        if (auto is not null) throw new PinnedLayoutException(auto.Path);
         return new ElementLayout(p.ElementCount!.Value, p.ElementLengthM!.Value, p.ElementRiseM!.Value, p.Former.OuterDiameterM!.Value, p.Wire.DiameterM);
     }
 }

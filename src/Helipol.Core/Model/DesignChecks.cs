@@ -24,23 +24,23 @@ public static class DesignChecks
         // The former must slide over the whip (or its cover).
         var fitsOver = design.Whip.CoverDiameterM ?? design.Whip.DiameterM;
         if (design.Whip.CoverDiameterM is { } cover && cover <= design.Whip.DiameterM)
-            errors.Add(doc.MarkOf("whip.cover_diameter"), "whip.cover_diameter", doc.WrittenOf("whip.cover_diameter"), $"larger than whip.diameter ({doc.WrittenOf("whip.diameter")})");
+            errors.Add(doc.MarkOf(Keys.WhipCoverDiameter), Keys.WhipCoverDiameter, doc.WrittenOf(Keys.WhipCoverDiameter), $"larger than {Keys.WhipDiameter} ({doc.WrittenOf(Keys.WhipDiameter)})");
         else if (fitsOver > former.BoreM)
         {
-            var key = design.Whip.CoverDiameterM is null ? "whip.diameter" : "whip.cover_diameter";
-            errors.Add(doc.MarkOf(key), key, doc.WrittenOf(key), $"at most polarizer.former.bore ({doc.WrittenOf("polarizer.former.bore")}) so the former slides over it");
+            var key = design.Whip.CoverDiameterM is null ? Keys.WhipDiameter : Keys.WhipCoverDiameter;
+            errors.Add(doc.MarkOf(key), key, doc.WrittenOf(key), $"at most {Keys.PolarizerFormerBore} ({doc.WrittenOf(Keys.PolarizerFormerBore)}) so the former slides over it");
         }
 
         if (former.OuterDiameterM is { } outer)
         {
             if (former.BoreM >= outer)
-                errors.Add(doc.MarkOf("polarizer.former.bore"), "polarizer.former.bore", doc.WrittenOf("polarizer.former.bore"),
-                    $"smaller than polarizer.former.outer_diameter ({doc.WrittenOf("polarizer.former.outer_diameter")})");
+                errors.Add(doc.MarkOf(Keys.PolarizerFormerBore), Keys.PolarizerFormerBore, doc.WrittenOf(Keys.PolarizerFormerBore),
+                    $"smaller than {Keys.PolarizerFormerOuterDiameter} ({doc.WrittenOf(Keys.PolarizerFormerOuterDiameter)})");
             else
             {
                 var wall = (outer - former.BoreM) / 2;
                 if (p.Wire.DiameterM >= wall)
-                    errors.Add(doc.MarkOf("polarizer.wire.diameter"), "polarizer.wire.diameter", doc.WrittenOf("polarizer.wire.diameter"),
+                    errors.Add(doc.MarkOf(Keys.PolarizerWireDiameter), Keys.PolarizerWireDiameter, doc.WrittenOf(Keys.PolarizerWireDiameter),
                         $"thinner than the former wall ({L(wall)} = (outer_diameter − bore)/2)");
             }
         }
@@ -48,16 +48,16 @@ public static class DesignChecks
         if (p.ElementRiseM is { } rise)
         {
             if (p.ElementLengthM is { } length && rise >= length)
-                errors.Add(doc.MarkOf("polarizer.element_rise"), "polarizer.element_rise", doc.WrittenOf("polarizer.element_rise"),
-                    $"less than polarizer.element_length ({doc.WrittenOf("polarizer.element_length")}): a wire cannot climb more than its length");
+                errors.Add(doc.MarkOf(Keys.PolarizerElementRise), Keys.PolarizerElementRise, doc.WrittenOf(Keys.PolarizerElementRise),
+                    $"less than {Keys.PolarizerElementLength} ({doc.WrittenOf(Keys.PolarizerElementLength)}): a wire cannot climb more than its length");
             else if (rise > former.HeightM)
-                errors.Add(doc.MarkOf("polarizer.element_rise"), "polarizer.element_rise", doc.WrittenOf("polarizer.element_rise"),
-                    $"at most polarizer.former.height ({doc.WrittenOf("polarizer.former.height")}) so the elements stay on the former");
+                errors.Add(doc.MarkOf(Keys.PolarizerElementRise), Keys.PolarizerElementRise, doc.WrittenOf(Keys.PolarizerElementRise),
+                    $"at most {Keys.PolarizerFormerHeight} ({doc.WrittenOf(Keys.PolarizerFormerHeight)}) so the elements stay on the former");
         }
 
         var layout = design.Practice;
         if (design.Whip.Kind == WhipKind.Monopole && p.CentreHeightM - layout.RiseM / 2 < p.Wire.RadiusM)
-            errors.Add(doc.MarkOf("polarizer.centre_height"), "polarizer.centre_height", doc.WrittenOf("polarizer.centre_height"),
+            errors.Add(doc.MarkOf(Keys.PolarizerCentreHeight), Keys.PolarizerCentreHeight, doc.WrittenOf(Keys.PolarizerCentreHeight),
                 $"at least {L(layout.RiseM / 2 + p.Wire.RadiusM)} on a monopole so the elements (rise {L(layout.RiseM)}) stay above the ground plane");
 
         // Elements touching one another: only decidable when the user pinned length and rise.
@@ -65,7 +65,7 @@ public static class DesignChecks
         {
             var gap = ElementClearance.MinimumAxisDistanceM(layout);
             if (gap < p.Wire.DiameterM)
-                errors.Add(doc.MarkOf("polarizer.element_length"), "polarizer.element_length", doc.WrittenOf("polarizer.element_length"),
+                errors.Add(doc.MarkOf(Keys.PolarizerElementLength), Keys.PolarizerElementLength, doc.WrittenOf(Keys.PolarizerElementLength),
                     $"elements that keep clear of each other: {layout.Count} elements of this length and rise come within {L(gap)} of each other, less than the wire diameter ({L(p.Wire.DiameterM)})");
         }
 
@@ -76,8 +76,8 @@ public static class DesignChecks
         var outerMm = (former.OuterDiameterM ?? design.Solve.Search.OuterDiameterMaxM) * 1e3;
         var (needWidthMm, needHeightMm) = BoardNeededMm(outerMm, design.Fabrication.KerfMm);
         if (design.Fabrication.BoardWidthMm < needWidthMm || design.Fabrication.BoardHeightMm < needHeightMm)
-            errors.Add(doc.MarkOf("fabrication.board"), "fabrication.board",
-                $"a board {doc.WrittenOf("fabrication.board.width")} by {doc.WrittenOf("fabrication.board.height")}",
+            errors.Add(doc.MarkOf(Keys.FabricationBoard), Keys.FabricationBoard,
+                $"a board {doc.WrittenOf(Keys.FabricationBoardWidth)} by {doc.WrittenOf(Keys.FabricationBoardHeight)}",
                 $"a board at least {needWidthMm.ToString("0.##", System.Globalization.CultureInfo.InvariantCulture)} mm wide by {needHeightMm.ToString("0.##", System.Globalization.CultureInfo.InvariantCulture)} mm high for one ring with its labels");
     }
 }

@@ -17,10 +17,10 @@ public static class DesignResolver
         var errors = new SpecErrors(doc.File);
         var band = ResolveBand(doc, errors);
         var whip = new Whip(
-            doc.Choice("whip.kind") == "monopole" ? WhipKind.Monopole : WhipKind.Dipole,
-            doc.Si("whip.length")!.Value,
-            doc.Si("whip.diameter")!.Value,
-            doc.Si("whip.cover_diameter"));
+            doc.Choice(Keys.WhipKind) == "monopole" ? WhipKind.Monopole : WhipKind.Dipole,
+            doc.Si(Keys.WhipLength)!.Value,
+            doc.Si(Keys.WhipDiameter)!.Value,
+            doc.Si(Keys.WhipCoverDiameter));
         var polarizer = ResolvePolarizer(doc);
         var design = new PolarizerDesign(
             doc.Get<TextValue>("name").Value,
@@ -39,16 +39,16 @@ public static class DesignResolver
 
     private static Band ResolveBand(SpecDocument doc, SpecErrors errors)
     {
-        var center = doc.Si("band.center")!.Value;
-        var low = doc.Si("band.low") ?? center * (1 - Band.DefaultHalfWidthFraction);
-        var high = doc.Si("band.high") ?? center * (1 + Band.DefaultHalfWidthFraction);
-        var given = doc.Find("band.low") is not null || doc.Find("band.high") is not null;
+        var center = doc.Si(Keys.BandCenter)!.Value;
+        var low = doc.Si(Keys.BandLow) ?? center * (1 - Band.DefaultHalfWidthFraction);
+        var high = doc.Si(Keys.BandHigh) ?? center * (1 + Band.DefaultHalfWidthFraction);
+        var given = doc.Find(Keys.BandLow) is not null || doc.Find(Keys.BandHigh) is not null;
         if (low >= high)
-            errors.Add(doc.MarkOf(doc.Find("band.low") is not null ? "band.low" : "band.high"),
-                doc.Find("band.low") is not null ? "band.low" : "band.high",
-                $"low {Hz(low)} and high {Hz(high)}", "band.low below band.high");
+            errors.Add(doc.MarkOf(doc.Find(Keys.BandLow) is not null ? Keys.BandLow : Keys.BandHigh),
+                doc.Find(Keys.BandLow) is not null ? Keys.BandLow : Keys.BandHigh,
+                $"low {Hz(low)} and high {Hz(high)}", $"{Keys.BandLow} below {Keys.BandHigh}");
         else if (center < low || center > high)
-            errors.Add(doc.MarkOf("band.center"), "band.center", doc.WrittenOf("band.center"), $"a center between band.low ({Hz(low)}) and band.high ({Hz(high)})");
+            errors.Add(doc.MarkOf(Keys.BandCenter), Keys.BandCenter, doc.WrittenOf(Keys.BandCenter), $"a center between {Keys.BandLow} ({Hz(low)}) and {Keys.BandHigh} ({Hz(high)})");
         return new Band(center, low, high, given);
     }
 
@@ -64,53 +64,53 @@ public static class DesignResolver
 
     private static Polarizer ResolvePolarizer(SpecDocument doc)
     {
-        var metal = MaterialTable.Conductor(doc.Choice("polarizer.wire.material"));
-        SourcedValue? conductivity = metal.ConductivitySPerM is null && doc.Find("polarizer.wire.conductivity") is null
+        var metal = MaterialTable.Conductor(doc.Choice(Keys.PolarizerWireMaterial));
+        SourcedValue? conductivity = metal.ConductivitySPerM is null && doc.Find(Keys.PolarizerWireConductivity) is null
             ? null
-            : Override(doc, "polarizer.wire.conductivity", metal.ConductivitySPerM ?? new SourcedValue(double.PositiveInfinity, "perfect conductor"));
-        var wire = new Wire(doc.Si("polarizer.wire.diameter")!.Value, metal, conductivity,
-            Override(doc, "polarizer.wire.permeability", metal.RelativePermeability));
+            : Override(doc, Keys.PolarizerWireConductivity, metal.ConductivitySPerM ?? new SourcedValue(double.PositiveInfinity, "perfect conductor"));
+        var wire = new Wire(doc.Si(Keys.PolarizerWireDiameter)!.Value, metal, conductivity,
+            Override(doc, Keys.PolarizerWirePermeability, metal.RelativePermeability));
 
-        var formerMaterial = MaterialTable.Former(doc.Choice("polarizer.former.material"));
-        var former = new Former(formerMaterial, doc.Si("polarizer.former.outer_diameter"),
-            doc.Si("polarizer.former.bore")!.Value, doc.Si("polarizer.former.height")!.Value,
-            Override(doc, "polarizer.former.permittivity", formerMaterial.RelativePermittivity),
-            Override(doc, "polarizer.former.loss_tangent", formerMaterial.LossTangent));
+        var formerMaterial = MaterialTable.Former(doc.Choice(Keys.PolarizerFormerMaterial));
+        var former = new Former(formerMaterial, doc.Si(Keys.PolarizerFormerOuterDiameter),
+            doc.Si(Keys.PolarizerFormerBore)!.Value, doc.Si(Keys.PolarizerFormerHeight)!.Value,
+            Override(doc, Keys.PolarizerFormerPermittivity, formerMaterial.RelativePermittivity),
+            Override(doc, Keys.PolarizerFormerLossTangent, formerMaterial.LossTangent));
 
         Wrap? wrap = null;
-        if (!doc.IsNone("polarizer.wrap"))
+        if (!doc.IsNone(Keys.PolarizerWrap))
         {
-            var tape = MaterialTable.Wrap(doc.Choice("polarizer.wrap.material"));
-            wrap = new Wrap(tape, Override(doc, "polarizer.wrap.thickness", tape.TypicalThicknessM!), doc.Integer("polarizer.wrap.layers"),
-                Override(doc, "polarizer.wrap.permittivity", tape.RelativePermittivity),
-                Override(doc, "polarizer.wrap.loss_tangent", tape.LossTangent)) { TentDistanceM = doc.Si("polarizer.wrap.tent") };
+            var tape = MaterialTable.Wrap(doc.Choice(Keys.PolarizerWrapMaterial));
+            wrap = new Wrap(tape, Override(doc, Keys.PolarizerWrapThickness, tape.TypicalThicknessM!), doc.Integer(Keys.PolarizerWrapLayers),
+                Override(doc, Keys.PolarizerWrapPermittivity, tape.RelativePermittivity),
+                Override(doc, Keys.PolarizerWrapLossTangent, tape.LossTangent)) { TentDistanceM = doc.Si(Keys.PolarizerWrapTent) };
         }
 
         Glue? glue = null;
-        if (!doc.IsNone("polarizer.glue"))
+        if (!doc.IsNone(Keys.PolarizerGlue))
         {
-            var adhesive = MaterialTable.Glue(doc.Choice("polarizer.glue.material"));
-            glue = new Glue(adhesive, doc.Si("polarizer.glue.thickness")!.Value,
-                Override(doc, "polarizer.glue.permittivity", adhesive.RelativePermittivity), adhesive.LossTangent);
+            var adhesive = MaterialTable.Glue(doc.Choice(Keys.PolarizerGlueMaterial));
+            glue = new Glue(adhesive, doc.Si(Keys.PolarizerGlueThickness)!.Value,
+                Override(doc, Keys.PolarizerGluePermittivity, adhesive.RelativePermittivity), adhesive.LossTangent);
         }
 
         return new Polarizer(
-            doc.Choice("polarizer.sense") == "lhcp" ? Sense.Lhcp : Sense.Rhcp,
-            doc.Choice("polarizer.winding") switch { "left" => Winding.Left, "right" => Winding.Right, _ => Winding.Auto },
-            doc.Find("polarizer.elements") is IntegerValue count ? count.Value : null,
-            doc.Si("polarizer.element_length"),
-            doc.Si("polarizer.element_rise"),
-            doc.Si("polarizer.centre_height")!.Value,
+            doc.Choice(Keys.PolarizerSense) == "lhcp" ? Sense.Lhcp : Sense.Rhcp,
+            doc.Choice(Keys.PolarizerWinding) switch { "left" => Winding.Left, "right" => Winding.Right, _ => Winding.Auto },
+            doc.Find(Keys.PolarizerElements) is IntegerValue count ? count.Value : null,
+            doc.Si(Keys.PolarizerElementLength),
+            doc.Si(Keys.PolarizerElementRise),
+            doc.Si(Keys.PolarizerCentreHeight)!.Value,
             wire, former, wrap, glue);
     }
 
     private static FabricationSettings ResolveFabrication(SpecDocument doc)
     {
         double Mm(string path) => doc.Si(path)!.Value * 1e3;
-        return new FabricationSettings(Mm("fabrication.kerf"), doc.Integer("fabrication.rings"),
-            Mm("fabrication.board.width"), Mm("fabrication.board.height"), Mm("fabrication.board.thickness"),
-            Mm("fabrication.print_clearance"), doc.Choice("fabrication.paper") == "letter" ? Paper.Letter : Paper.A4,
-            doc.Integer("fabrication.dpi"));
+        return new FabricationSettings(Mm(Keys.FabricationKerf), doc.Integer(Keys.FabricationRings),
+            Mm(Keys.FabricationBoardWidth), Mm(Keys.FabricationBoardHeight), Mm(Keys.FabricationBoardThickness),
+            Mm(Keys.FabricationPrintClearance), doc.Choice(Keys.FabricationPaper) == "letter" ? Paper.Letter : Paper.A4,
+            doc.Integer(Keys.FabricationDpi));
     }
 
     /// <summary>
@@ -121,18 +121,18 @@ public static class DesignResolver
     {
         const double Deg = Math.PI / 180;
         var monopole = whip.Kind == WhipKind.Monopole;
-        var from = doc.Si("solve.elevations.from") ?? (monopole ? 10 : -30) * Deg;
-        var to = doc.Si("solve.elevations.to") ?? (monopole ? 50 : 30) * Deg;
+        var from = doc.Si(Keys.SolveElevationsFrom) ?? (monopole ? 10 : -30) * Deg;
+        var to = doc.Si(Keys.SolveElevationsTo) ?? (monopole ? 50 : 30) * Deg;
         if (from >= to)
         {
-            var at = doc.Find("solve.elevations.to") is not null ? "solve.elevations.to" : "solve.elevations.from";
-            errors.Add(doc.MarkOf(at), at, $"from {QuantityKind.Angle.FormatSi(from)} to {QuantityKind.Angle.FormatSi(to)}", "solve.elevations.from below solve.elevations.to");
+            var at = doc.Find(Keys.SolveElevationsTo) is not null ? Keys.SolveElevationsTo : Keys.SolveElevationsFrom;
+            errors.Add(doc.MarkOf(at), at, $"from {QuantityKind.Angle.FormatSi(from)} to {QuantityKind.Angle.FormatSi(to)}", $"{Keys.SolveElevationsFrom} below {Keys.SolveElevationsTo}");
         }
 
-        var lengthRange = doc.Find("solve.search.element_length") as PairValue;
-        var riseRange = doc.Find("solve.search.element_rise") as PairValue;
-        var diameterRange = doc.Find("solve.search.outer_diameter") as PairValue;
-        var counts = doc.Get<PairValue>("solve.search.elements");
+        var lengthRange = doc.Find(Keys.SolveSearchElementLength) as PairValue;
+        var riseRange = doc.Find(Keys.SolveSearchElementRise) as PairValue;
+        var diameterRange = doc.Find(Keys.SolveSearchOuterDiameter) as PairValue;
+        var counts = doc.Get<PairValue>(Keys.SolveSearchElements);
         var practiceRise = PracticeScaling.ElementRiseM(band.CenterHz);
         var practiceDiameter = polarizer.OuterDiameterOrPracticeM(band.CenterHz);
         var search = new SearchOptions(
@@ -143,17 +143,17 @@ public static class DesignResolver
             High(riseRange) ?? Math.Min(1.5 * practiceRise, polarizer.Former.HeightM),
             Low(diameterRange) ?? Math.Max(0.7 * practiceDiameter, polarizer.Former.BoreM + 2 * polarizer.MinimumWallM),
             High(diameterRange) ?? Math.Max(1.4 * practiceDiameter, polarizer.Former.BoreM + 4 * polarizer.MinimumWallM),
-            doc.Integer("solve.search.grid"));
+            doc.Integer(Keys.SolveSearchGrid));
 
         return new SolveOptions(
-            doc.Choice("solve.objective") == "mean-ar" ? Objective.MeanAxialRatio : Objective.WorstAxialRatio,
-            from, to, doc.Si("solve.elevation_step")!.Value, doc.Si("solve.azimuth_step")!.Value,
-            doc.Integer("solve.frequencies"), doc.Number("solve.gain_weight")!.Value, search,
-            new SweepOptions(doc.Integer("solve.sweep.points"), doc.Si("solve.sweep.span")!.Value))
+            doc.Choice(Keys.SolveObjective) == "mean-ar" ? Objective.MeanAxialRatio : Objective.WorstAxialRatio,
+            from, to, doc.Si(Keys.SolveElevationStep)!.Value, doc.Si(Keys.SolveAzimuthStep)!.Value,
+            doc.Integer(Keys.SolveFrequencies), doc.Number(Keys.SolveGainWeight)!.Value, search,
+            new SweepOptions(doc.Integer(Keys.SolveSweepPoints), doc.Si(Keys.SolveSweepSpan)!.Value))
         {
-            AzimuthSpanRad = doc.Si("solve.azimuth_span")!.Value,
-            AxialRatioLimitDb = doc.Si("solve.axial_ratio_limit")!.Value,
-            ReceiverOhm = doc.Si("solve.receiver_impedance")!.Value,
+            AzimuthSpanRad = doc.Si(Keys.SolveAzimuthSpan)!.Value,
+            AxialRatioLimitDb = doc.Si(Keys.SolveAxialRatioLimit)!.Value,
+            ReceiverOhm = doc.Si(Keys.SolveReceiverImpedance)!.Value,
         };
     }
 
@@ -161,12 +161,12 @@ public static class DesignResolver
     private static double? High(PairValue? pair) => pair?.High is QuantityValue q ? q.Si : null;
 
     private static ToleranceOptions ResolveTolerance(SpecDocument doc) => new(
-        doc.Integer("tolerance.builds"),
-        doc.Si("tolerance.element_length")!.Value,
-        doc.Si("tolerance.element_rise")!.Value,
-        doc.Si("tolerance.azimuth")!.Value,
-        doc.Si("tolerance.wrap_thickness")!.Value,
-        doc.Integer("tolerance.seed"));
+        doc.Integer(Keys.ToleranceBuilds),
+        doc.Si(Keys.ToleranceElementLength)!.Value,
+        doc.Si(Keys.ToleranceElementRise)!.Value,
+        doc.Si(Keys.ToleranceAzimuth)!.Value,
+        doc.Si(Keys.ToleranceWrapThickness)!.Value,
+        doc.Integer(Keys.ToleranceSeed));
 
     private static CalibrationReference? ResolveCalibration(SpecDocument doc, SpecErrors errors)
     {

@@ -41,31 +41,31 @@ public static class DesignWarnings
         var lambda = design.Band.WavelengthM;
         var p = design.Polarizer;
         if (p.Wire.RadiusM > MaxRadiusOverWavelength * lambda)
-            Warn("polarizer.wire.diameter", $"wire radius {Mm(p.Wire.RadiusM)} is more than 1 % of the wavelength ({Mm(lambda)}); the thin-wire model loses accuracy");
+            Warn(Keys.PolarizerWireDiameter, $"wire radius {Mm(p.Wire.RadiusM)} is more than 1 % of the wavelength ({Mm(lambda)}); the thin-wire model loses accuracy");
         if (design.Whip.RadiusM > MaxRadiusOverWavelength * lambda)
-            Warn("whip.diameter", $"whip radius {Mm(design.Whip.RadiusM)} is more than 1 % of the wavelength ({Mm(lambda)}); the thin-wire model loses accuracy");
+            Warn(Keys.WhipDiameter, $"whip radius {Mm(design.Whip.RadiusM)} is more than 1 % of the wavelength ({Mm(lambda)}); the thin-wire model loses accuracy");
 
         var layout = design.Practice;
         if (layout.LengthM < MinElementLengthOverRadius * p.Wire.RadiusM)
-            Warn("polarizer.element_length", $"elements of {Mm(layout.LengthM)} are shorter than {MinElementLengthOverRadius} wire radii; too few thin-wire segments fit");
+            Warn(Keys.PolarizerElementLength, $"elements of {Mm(layout.LengthM)} are shorter than {MinElementLengthOverRadius} wire radii; too few thin-wire segments fit");
 
         var margin = (p.Former.HeightM - layout.RiseM) / 2;
         if (margin < p.Wire.DiameterM)
-            Warn("polarizer.former.height", $"element ends come within {Mm(Math.Max(0, margin))} of the former's edge (rise {Mm(layout.RiseM)}, height {Mm(p.Former.HeightM)}); glue and tape hold poorly there");
+            Warn(Keys.PolarizerFormerHeight, $"element ends come within {Mm(Math.Max(0, margin))} of the former's edge (rise {Mm(layout.RiseM)}, height {Mm(p.Former.HeightM)}); glue and tape hold poorly there");
 
         // The printed sleeve's grooves: deep enough to print, narrow enough to locate the wire.
         var wireMm = p.Wire.DiameterM * 1e3;
         var grooveMm = GrooveDepthPerWireDiameter * wireMm;
         if (grooveMm < MinPrintedGrooveDepthMm)
-            Warn("polarizer.wire.diameter", $"the printed sleeve's grooves would be {grooveMm.ToString("0.###", CultureInfo.InvariantCulture)} mm deep ({GrooveDepthPerWireDiameter} × wire diameter), less than one {MinPrintedGrooveDepthMm.ToString("0.#", CultureInfo.InvariantCulture)} mm print layer; too shallow to hold the wire");
+            Warn(Keys.PolarizerWireDiameter, $"the printed sleeve's grooves would be {grooveMm.ToString("0.###", CultureInfo.InvariantCulture)} mm deep ({GrooveDepthPerWireDiameter} × wire diameter), less than one {MinPrintedGrooveDepthMm.ToString("0.#", CultureInfo.InvariantCulture)} mm print layer; too shallow to hold the wire");
         if (design.Fabrication.PrintClearanceMm > wireMm / 2)
-            Warn("fabrication.print_clearance", $"grooves {(wireMm + design.Fabrication.PrintClearanceMm).ToString("0.##", CultureInfo.InvariantCulture)} mm wide for a {wireMm.ToString("0.##", CultureInfo.InvariantCulture)} mm wire let it wander more than a quarter diameter either side; the printed sleeve no longer places the element");
+            Warn(Keys.FabricationPrintClearance, $"grooves {(wireMm + design.Fabrication.PrintClearanceMm).ToString("0.##", CultureInfo.InvariantCulture)} mm wide for a {wireMm.ToString("0.##", CultureInfo.InvariantCulture)} mm wire let it wander more than a quarter diameter either side; the printed sleeve no longer places the element");
 
         var top = p.CentreHeightM + layout.RiseM / 2;
         var bottom = p.CentreHeightM - layout.RiseM / 2;
         var (whipLow, whipHigh) = design.Whip.Kind == WhipKind.Monopole ? (0.0, design.Whip.LengthM) : (-design.Whip.LengthM / 2, design.Whip.LengthM / 2);
         if (top > whipHigh || bottom < whipLow)
-            Warn("polarizer.centre_height", $"elements span {Mm(bottom)} to {Mm(top)} but the whip spans {Mm(whipLow)} to {Mm(whipHigh)}; the elements reach past its ends");
+            Warn(Keys.PolarizerCentreHeight, $"elements span {Mm(bottom)} to {Mm(top)} but the whip spans {Mm(whipLow)} to {Mm(whipHigh)}; the elements reach past its ends");
         return warnings.OrderBy(w => w.Mark.Line).ThenBy(w => w.Mark.Column).ToList();
     }
 }

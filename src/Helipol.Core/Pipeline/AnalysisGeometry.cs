@@ -17,10 +17,10 @@ public static class AnalysisGeometry
         var p = design.Polarizer;
         var layout = design.Practice;
         var keys = new List<string>();
-        if (p.ElementCount is null) keys.Add("polarizer.elements");
-        if (p.ElementLengthM is null) keys.Add("polarizer.element_length");
-        if (p.ElementRiseM is null) keys.Add("polarizer.element_rise");
-        if (p.Former.OuterDiameterM is null) keys.Add("polarizer.former.outer_diameter");
+        if (p.ElementCount is null) keys.Add(Keys.PolarizerElements);
+        if (p.ElementLengthM is null) keys.Add(Keys.PolarizerElementLength);
+        if (p.ElementRiseM is null) keys.Add(Keys.PolarizerElementRise);
+        if (p.Former.OuterDiameterM is null) keys.Add(Keys.PolarizerFormerOuterDiameter);
         practiceKeys = keys;
         var factor = CoatingCalibration.For(design).Factor;
         PolarizerBuild Build(Winding w) => PolarizerBuild.From(design, layout.Count, layout.LengthM, layout.RiseM, layout.OuterDiameterM, w, factor);

@@ -26,7 +26,7 @@ public static class DesignRefusal
 
     /// <summary>The line for a search that found nothing it could build.</summary>
     public static string SearchLine(PolarizerDesign design, SearchException ex) =>
-        $"{design.SourceFile}: polarizer: found {ex.Message}, allowed a search range with buildable geometry (widen solve.search or the former)";
+        $"{design.SourceFile}: polarizer: found {ex.Message}, allowed a search range with buildable geometry (widen {Keys.SolveSearch} or the former)";
 
     /// <summary>Error line for a verb that needs a pinned geometry (file:line:column: key: found auto, allowed ...).</summary>
     public static string PinnedError(PolarizerDesign design, string keyPath)

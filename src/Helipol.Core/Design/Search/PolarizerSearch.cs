@@ -112,16 +112,16 @@ public static class PolarizerSearch
         var found = new List<string>();
         string Mm(double m) => FormattableString.Invariant($"{m * 1e3:0.##} mm");
         if (counts.Length > 1 && (count == counts[0] || count == counts[^1]))
-            found.Add(FormattableString.Invariant($"element count {count} is the {(count == counts[0] ? "fewest" : "most")} searched (solve.search.elements)"));
+            found.Add(FormattableString.Invariant($"element count {count} is the {(count == counts[0] ? "fewest" : "most")} searched ({Keys.SolveSearchElements})"));
         if (diameters.Length > 1 && (diameterM == diameters[0] || diameterM == diameters[^1]))
-            found.Add($"former diameter {Mm(diameterM)} is the {(diameterM == diameters[0] ? "smallest" : "largest")} searched (solve.search.outer_diameter)");
+            found.Add($"former diameter {Mm(diameterM)} is the {(diameterM == diameters[0] ? "smallest" : "largest")} searched ({Keys.SolveSearchOuterDiameter})");
         double tol = polishM / 2;
         if (lengthFree && lengths.Length > 1 && (lengthM <= lengths[0] + tol || lengthM >= lengths[^1] - tol))
-            found.Add($"element length {Mm(lengthM)} is at the {(lengthM <= lengths[0] + tol ? "short" : "long")} end of the search range {Mm(lengths[0])} to {Mm(lengths[^1])} (solve.search.element_length)");
+            found.Add($"element length {Mm(lengthM)} is at the {(lengthM <= lengths[0] + tol ? "short" : "long")} end of the search range {Mm(lengths[0])} to {Mm(lengths[^1])} ({Keys.SolveSearchElementLength})");
         if (riseFree && rises.Length > 1 && (riseM <= rises[0] + tol || riseM >= rises[^1] - tol))
             found.Add(riseM >= rises[^1] - tol && rises[^1] >= fabricationMaxRiseM - 1e-9
-                ? $"element rise {Mm(riseM)} is the largest the former height allows (polarizer.former.height)"
-                : $"element rise {Mm(riseM)} is at the {(riseM <= rises[0] + tol ? "low" : "high")} end of the search range {Mm(rises[0])} to {Mm(rises[^1])} (solve.search.element_rise)");
+                ? $"element rise {Mm(riseM)} is the largest the former height allows ({Keys.PolarizerFormerHeight})"
+                : $"element rise {Mm(riseM)} is at the {(riseM <= rises[0] + tol ? "low" : "high")} end of the search range {Mm(rises[0])} to {Mm(rises[^1])} ({Keys.SolveSearchElementRise})");
         return found;
     }
 

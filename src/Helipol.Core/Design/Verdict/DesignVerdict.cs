@@ -102,12 +102,12 @@ public static class VerdictJudge
             if (solved.Search.LimitsReached.Count > 0) return $"widen the search ({solved.Search.LimitsReached[0]})";
             if (solved.LengthPinned || solved.RisePinned)
             {
-                var keys = new[] { solved.LengthPinned ? "polarizer.element_length" : null, solved.RisePinned ? "polarizer.element_rise" : null }.Where(k => k is not null);
+                var keys = new[] { solved.LengthPinned ? Keys.PolarizerElementLength : null, solved.RisePinned ? Keys.PolarizerElementRise : null }.Where(k => k is not null);
                 return $"let the solver choose: set {string.Join(" and ", keys)} to auto";
             }
             if (NarrowerWindow(design, solved) is { } w) return w;
-            if (solved.CountPinned && solved.Layout.Count < 8) return "more elements (polarizer.elements: auto)";
-            return string.Create(inv, $"a larger former: more than {solved.Layout.OuterDiameterM * 1e3:0} mm across (polarizer.former.outer_diameter, solve.search.outer_diameter)");
+            if (solved.CountPinned && solved.Layout.Count < 8) return $"more elements ({Keys.PolarizerElements}: auto)";
+            return string.Create(inv, $"a larger former: more than {solved.Layout.OuterDiameterM * 1e3:0} mm across ({Keys.PolarizerFormerOuterDiameter}, {Keys.SolveSearchOuterDiameter})");
         }
         if (advantage <= WorksGainDb && vswr > bareVswr)
             return string.Create(inv, $"match the whip to the receiver: the polarizer raises VSWR from {Vswr(bareVswr)} to {Vswr(vswr)}");
@@ -116,9 +116,9 @@ public static class VerdictJudge
         {
             double spreadMm = design.Tolerance.ElementLengthM * 1e3;
             if (double.IsFinite(tolerance.CutToleranceMm) && tolerance.CutToleranceMm < spreadMm)
-                return string.Create(inv, $"cut every element to within ±{tolerance.CutToleranceMm:0.0#} mm, tighter than the ±{spreadMm:0.0#} mm assumed (tolerance.element_length)");
+                return string.Create(inv, $"cut every element to within ±{tolerance.CutToleranceMm:0.0#} mm, tighter than the ±{spreadMm:0.0#} mm assumed ({Keys.ToleranceElementLength})");
             string median = double.IsFinite(tolerance.ArP50Db) ? string.Create(inv, $"{tolerance.ArP50Db:0.0} dB") : "the wrong sense";
-            return string.Create(inv, $"more axial-ratio margin: build errors take the worst axial ratio past {design.Solve.AxialRatioLimitDb:0.#} dB (median build {median}); {(solved.CountPinned ? "more elements or " : "")}a narrower coverage window (solve.elevations, solve.azimuth_span)");
+            return string.Create(inv, $"more axial-ratio margin: build errors take the worst axial ratio past {design.Solve.AxialRatioLimitDb:0.#} dB (median build {median}); {(solved.CountPinned ? "more elements or " : "")}a narrower coverage window ({Keys.SolveElevations}, {Keys.SolveAzimuthSpan})");
         }
         if (tolerance is not null && double.IsFinite(tolerance.CutToleranceMm))
             return string.Create(inv, $"{(grade == Grade.Works ? "build it; " : "")}cut every element to within ±{tolerance.CutToleranceMm:0.0#} mm and hold the rise to ±{tolerance.RiseToleranceMm:0.0#} mm");
@@ -146,7 +146,7 @@ public static class VerdictJudge
         if (bestStart < 0 || bestLength == rows.Length) return null;
         double from = rows[bestStart], to = rows[bestStart + bestLength - 1];
         if (to - from < 10 * Math.PI / 180 - 1e-9) return null;
-        return string.Create(CultureInfo.InvariantCulture, $"a narrower coverage window: the axial ratio holds from {Deg(from)}° to {Deg(to)}° elevation (solve.elevations)");
+        return string.Create(CultureInfo.InvariantCulture, $"a narrower coverage window: the axial ratio holds from {Deg(from)}° to {Deg(to)}° elevation ({Keys.SolveElevations})");
     }
 
     public static string Window(PolarizerDesign design)
