@@ -57,9 +57,9 @@ public static class SolveVerb
         void Row(string name, string value) => design.AddRow(Markup.Escape(name), Markup.Escape(value));
         Row("band", $"{MHz(d.Band.LowHz)} .. {MHz(d.Band.HighHz)} (center {MHz(d.Band.CenterHz)}{(d.Band.EdgesGiven ? "" : ", edges ±1.5 % by default")})");
         Row("wavelength", Mm(d.Band.WavelengthM));
-        Row("whip", $"{(d.Whip.Kind == WhipKind.Monopole ? "monopole" : "dipole")}, {Mm(d.Whip.LengthM)} long, {Mm(d.Whip.DiameterM)} diameter"
+        Row("whip", $"{ChoiceWords.WhipKind.Word(d.Whip.Kind)}, {Mm(d.Whip.LengthM)} long, {Mm(d.Whip.DiameterM)} diameter"
             + (d.Whip.CoverDiameterM is { } c ? $", cover {Mm(c)}" : ""));
-        Row("sense", p.Sense == Sense.Lhcp ? "LHCP" : "RHCP");
+        Row("sense", ChoiceWords.Label(p.Sense));
         Row("wire", $"{Mm(p.Wire.DiameterM)} {p.Wire.Material.Name}" + (p.Wire.ConductivitySPerM is { } sigma ? $", {sigma.Value.ToString("0.###e0", CultureInfo.InvariantCulture)} S/m" : ", lossless"));
         Row("former", $"{p.Former.Material.Name}, bore {Mm(p.Former.BoreM)}, height {Mm(p.Former.HeightM)}, εr {p.Former.RelativePermittivity.Value.ToString("0.###", CultureInfo.InvariantCulture)}");
         Row("wrap", p.Wrap is { } w ? $"{w.Layers} × {Mm(w.LayerThicknessM.Value)} {w.Material.Name}, εr {w.RelativePermittivity.Value.ToString("0.##", CultureInfo.InvariantCulture)}" : "none");
@@ -71,7 +71,7 @@ public static class SolveVerb
         var elements = new Table().Title("elements, solved by the field model")
             .AddColumn("quantity").AddColumn("solved").AddColumn(Markup.Escape(PracticeScaling.Label)).AddColumn("from");
         string From(bool pinned) => pinned ? "design file" : "search";
-        string W(Winding w) => w == Winding.Left ? "left" : "right";
+        string W(Winding w) => ChoiceWords.Winding.Word(w);
         elements.AddRow("elements", s.Layout.Count.ToString(CultureInfo.InvariantCulture), practice.Count.ToString(CultureInfo.InvariantCulture), From(s.CountPinned));
         elements.AddRow("element length", Mm(s.Layout.LengthM), Mm(practice.LengthM), From(s.LengthPinned));
         elements.AddRow("element rise", Mm(s.Layout.RiseM), Mm(practice.RiseM), From(s.RisePinned));
@@ -80,7 +80,7 @@ public static class SolveVerb
         elements.AddRow("arc angle", Deg(s.Layout.ArcAngleRad), Deg(practice.ArcAngleRad), "derived");
         elements.AddRow("pitch angle", Deg(s.Layout.PitchAngleRad), Deg(practice.PitchAngleRad), "derived");
         elements.AddRow("winding", W(s.Winding), W(s.Practice.Winding) + " (builders' rule)", s.WindingPinned ? "design file" : "field model");
-        elements.AddRow(Markup.Escape($"worst AR, {(s.Sense == Sense.Lhcp ? "LHCP" : "RHCP")}"), Markup.Escape(Short(s.Points)),
+        elements.AddRow(Markup.Escape($"worst AR, {ChoiceWords.Label(s.Sense)}"), Markup.Escape(Short(s.Points)),
             s.Practice.ObjectiveDb is null ? "not modelled" : Markup.Escape(Short(s.Practice.Points)), "field model");
         elements.AddRow("gain, wanted sense", Db(s.MeanGainDbic) + "ic", "", "field model");
         elements.AddRow(Markup.Escape($"realized gain, {d.Solve.ReceiverOhm.ToString("0.#", CultureInfo.InvariantCulture)} Ω"), Db(s.MeanRealizedGainDbic) + "ic", "", "field model");

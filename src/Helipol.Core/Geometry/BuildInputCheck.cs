@@ -1,4 +1,5 @@
 using System.Globalization;
+using Helipol.Model;
 
 namespace Helipol.Geometry;
 
@@ -10,6 +11,9 @@ internal static class BuildInputCheck
 {
     public static void ThrowIfUnbuildable(PolarizerBuildInput i)
     {
+        // The model's winding has a third value, auto (the solver picks); an object is wound one way.
+        if (i.Winding is not (Winding.Left or Winding.Right))
+            throw new ArgumentException($"winding: found {ChoiceWords.Winding.Word(i.Winding)}, allowed left or right (the solver resolves auto before fabrication)");
         Require(i.ElementCount is >= 1 and <= 64, "element count", i.ElementCount, "1 to 64");
         Require(i.ElementLengthMm > 0, "element length", i.ElementLengthMm, "> 0 mm");
         Require(i.ElementRiseMm > 0 && i.ElementRiseMm < i.ElementLengthMm, "element rise", i.ElementRiseMm, "between 0 and the element length");

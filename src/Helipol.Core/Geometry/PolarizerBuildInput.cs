@@ -1,18 +1,5 @@
+using Helipol.Model;
 namespace Helipol.Geometry;
-
-/// <summary>Circular polarization sense per IEEE Std 145 (right-hand = clockwise for an observer
-/// looking in the direction of propagation).</summary>
-public enum CircularSense { Rhcp, Lhcp }
-
-/// <summary>Which way an element winds round the former: right = azimuth increases as the element rises
-/// (a right-handed helix), left = azimuth decreases.</summary>
-public enum HelixWinding { Right, Left }
-
-/// <summary>Paper for the printable sheets.</summary>
-public enum PaperSize { A4, Letter }
-
-/// <summary>The whip the former goes on: a centre-fed dipole or a monopole over a ground plane.</summary>
-public enum WhipShape { Dipole, Monopole }
 
 /// <summary>One line of the build packet's summary page.</summary>
 public sealed record SummaryLine(string Key, string Value);
@@ -20,13 +7,15 @@ public sealed record SummaryLine(string Key, string Value);
 /// <summary>
 /// Everything the fabrication set is made from: the solved element and the build settings, all in
 /// millimetres. This is the neutral hand-over from the design to the geometry; nothing here knows
-/// about the design file or the solver.
+/// about the design file or the solver. Where a setting has a default, it is the design file's
+/// default for the same key (held equal by a test), so a caller that leaves it out gets what a
+/// design file that leaves it out gets.
 /// </summary>
 public sealed record PolarizerBuildInput
 {
     public required string DesignName { get; init; }
-    public required CircularSense Sense { get; init; }
-    public required HelixWinding Winding { get; init; }
+    public required Sense Sense { get; init; }
+    public required Winding Winding { get; init; }
     public required int ElementCount { get; init; }
     /// <summary>Total wire length of one element along the helix, mm.</summary>
     public required double ElementLengthMm { get; init; }
@@ -44,7 +33,7 @@ public sealed record PolarizerBuildInput
     public bool FormerPrinted { get; init; }
     /// <summary>Name of the former's material, for the assembly steps.</summary>
     public string FormerMaterial { get; init; } = "foam";
-    public WhipShape Whip { get; init; } = WhipShape.Dipole;
+    public WhipKind Whip { get; init; } = WhipKind.Dipole;
     /// <summary>Whip length (tip to tip for a dipole, ground to tip for a monopole), mm; 0 when not known.</summary>
     public double WhipLengthMm { get; init; }
     /// <summary>Height of the elements' middle above the feed gap (dipole) or the ground plane (monopole), mm.</summary>
@@ -55,21 +44,21 @@ public sealed record PolarizerBuildInput
     /// <summary>Width of material the cutter removes, mm.</summary>
     public double KerfMm { get; init; } = 0.2;
     /// <summary>Number of foam rings stacked to make the former.</summary>
-    public int RingCount { get; init; } = 1;
-    public double BoardWidthMm { get; init; } = 200;
-    public double BoardHeightMm { get; init; } = 150;
-    public double BoardThicknessMm { get; init; } = 10;
+    public int RingCount { get; init; } = 6;
+    public double BoardWidthMm { get; init; } = 300;
+    public double BoardHeightMm { get; init; } = 200;
+    public double BoardThicknessMm { get; init; } = 38;
     /// <summary>Clearance added to printed fits (bore over the cover, groove over the wire), mm.</summary>
     public double PrintClearanceMm { get; init; } = 0.2;
     /// <summary>Clearance added to the wire diameter for drilled holes, mm.</summary>
     public double DrillClearanceMm { get; init; } = 0.2;
-    public PaperSize Paper { get; init; } = PaperSize.A4;
+    public Paper Paper { get; init; } = Paper.A4;
     public int Dpi { get; init; } = 300;
     public double LengthToleranceMm { get; init; } = 0.5;
 
     /// <summary>True when the length and rise tolerances are the tolerance analysis's "cut to within" figures, false when they are the design's assumed spreads.</summary>
     public bool ToleranceIsCutFigure { get; init; }
-    public double RiseToleranceMm { get; init; } = 0.5;
+    public double RiseToleranceMm { get; init; } = 1;
     /// <summary>Design (centre) frequency, used on labels only.</summary>
     public double FrequencyHz { get; init; }
     public IReadOnlyList<SummaryLine> SummaryLines { get; init; } = [];

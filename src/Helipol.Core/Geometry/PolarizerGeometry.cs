@@ -19,7 +19,7 @@ public sealed class PolarizerGeometry
     public double ArcAngleRad { get; }
     /// <summary>Pitch angle from the horizontal at the wire axis, atan(h / sqrt(L² − h²)).</summary>
     public double PitchAngleRad { get; }
-    public int WindingSign => Input.Winding == HelixWinding.Right ? 1 : -1;
+    public int WindingSign => Input.Winding == Winding.Right ? 1 : -1;
     /// <summary>Spacing between element starts along the circumference at the wire axis, mm.</summary>
     public double ElementSpacingMm => 2 * Math.PI * ElementAxisRadiusMm / Input.ElementCount;
     /// <summary>

@@ -1,3 +1,4 @@
+using Helipol.Model;
 namespace Helipol.Geometry;
 
 /// <summary>
@@ -16,9 +17,9 @@ public sealed record SenseMark(char Letter, double CentreShearedAzimuthRad, doub
         _ => throw new ArgumentOutOfRangeException(nameof(letter)),
     };
 
-    public static SenseMark Place(CircularSense sense, double lowerMm, double upperMm, double groovePitchRad, double grooveHalfRad, double radiusMm)
+    public static SenseMark Place(Sense sense, double lowerMm, double upperMm, double groovePitchRad, double grooveHalfRad, double radiusMm)
     {
-        var letter = sense == CircularSense.Rhcp ? 'R' : 'L';
+        var letter = sense == Sense.Rhcp ? 'R' : 'L';
         // Lattice of 7 × 9 points including an unsunk border; fits 80 % of the element's rise and
         // 80 % of the land between two grooves, and is at most 0.6 mm per step.
         var land = groovePitchRad - 2 * grooveHalfRad;

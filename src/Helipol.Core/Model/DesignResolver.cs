@@ -17,7 +17,7 @@ public static class DesignResolver
         var errors = new SpecErrors(doc.File);
         var band = ResolveBand(doc, errors);
         var whip = new Whip(
-            doc.Choice(Keys.WhipKind) == "monopole" ? WhipKind.Monopole : WhipKind.Dipole,
+            Keys.WhipKind.From(doc),
             doc.Si(Keys.WhipLength)!.Value,
             doc.Si(Keys.WhipDiameter)!.Value,
             doc.Si(Keys.WhipCoverDiameter));
@@ -68,7 +68,7 @@ public static class DesignResolver
         SourcedValue? conductivity = metal.ConductivitySPerM is null && doc.Find(Keys.PolarizerWireConductivity) is null
             ? null
             : Override(doc, Keys.PolarizerWireConductivity, metal.ConductivitySPerM ?? new SourcedValue(double.PositiveInfinity, "perfect conductor"));
-        var wire = new Wire(doc.Si(Keys.PolarizerWireDiameter)!.Value, metal, conductivity,
+        var wire = new ElementWire(doc.Si(Keys.PolarizerWireDiameter)!.Value, metal, conductivity,
             Override(doc, Keys.PolarizerWirePermeability, metal.RelativePermeability));
 
         var formerMaterial = MaterialTable.Former(doc.Choice(Keys.PolarizerFormerMaterial));
@@ -95,8 +95,8 @@ public static class DesignResolver
         }
 
         return new Polarizer(
-            doc.Choice(Keys.PolarizerSense) == "lhcp" ? Sense.Lhcp : Sense.Rhcp,
-            doc.Choice(Keys.PolarizerWinding) switch { "left" => Winding.Left, "right" => Winding.Right, _ => Winding.Auto },
+            Keys.PolarizerSense.From(doc),
+            Keys.PolarizerWinding.From(doc),
             doc.Find(Keys.PolarizerElements) is IntegerValue count ? count.Value : null,
             doc.Si(Keys.PolarizerElementLength),
             doc.Si(Keys.PolarizerElementRise),
@@ -109,7 +109,7 @@ public static class DesignResolver
         double Mm(string path) => doc.Si(path)!.Value * 1e3;
         return new FabricationSettings(Mm(Keys.FabricationKerf), doc.Integer(Keys.FabricationRings),
             Mm(Keys.FabricationBoardWidth), Mm(Keys.FabricationBoardHeight), Mm(Keys.FabricationBoardThickness),
-            Mm(Keys.FabricationPrintClearance), doc.Choice(Keys.FabricationPaper) == "letter" ? Paper.Letter : Paper.A4,
+            Mm(Keys.FabricationPrintClearance), Keys.FabricationPaper.From(doc),
             doc.Integer(Keys.FabricationDpi));
     }
 
@@ -146,7 +146,7 @@ public static class DesignResolver
             doc.Integer(Keys.SolveSearchGrid));
 
         return new SolveOptions(
-            doc.Choice(Keys.SolveObjective) == "mean-ar" ? Objective.MeanAxialRatio : Objective.WorstAxialRatio,
+            Keys.SolveObjective.From(doc),
             from, to, doc.Si(Keys.SolveElevationStep)!.Value, doc.Si(Keys.SolveAzimuthStep)!.Value,
             doc.Integer(Keys.SolveFrequencies), doc.Number(Keys.SolveGainWeight)!.Value, search,
             new SweepOptions(doc.Integer(Keys.SolveSweepPoints), doc.Si(Keys.SolveSweepSpan)!.Value))

@@ -5,12 +5,21 @@ namespace Helipol.Model;
 /// name a key through these, never by typing its path, so a renamed key breaks the build, not a message.
 /// The path converts to the string the Spec document is indexed by.
 /// </summary>
-public sealed record DesignKey(string Path)
+public record DesignKey(string Path)
 {
     public static implicit operator string(DesignKey key) => key.Path;
 
     /// <summary>The table's entry: what the key accepts, its default and its meaning.</summary>
     public Spec.Fields.FieldDefinition Field => Spec.DesignKeys.Walk(Spec.DesignKeys.Root, "").First(e => e.Path == Path).Field;
+
+    public override string ToString() => Path;
+}
+
+/// <summary>A key whose value is one word of a fixed list, bound to the enum it stands for.</summary>
+public sealed record ChoiceKey<T>(string Path, WordMap<T> Words) : DesignKey(Path) where T : struct, Enum
+{
+    /// <summary>The value the (already checked) document holds for this key.</summary>
+    public T From(Spec.SpecDocument doc) => Words.Value(doc.Choice(Path));
 
     public override string ToString() => Path;
 }
@@ -29,14 +38,14 @@ public static class Keys
     public static readonly DesignKey BandHigh = Known("band.high");
 
     public static readonly DesignKey Whip = Known("whip");
-    public static readonly DesignKey WhipKind = Known("whip.kind");
+    public static readonly ChoiceKey<Model.WhipKind> WhipKind = Choice("whip.kind", ChoiceWords.WhipKind);
     public static readonly DesignKey WhipLength = Known("whip.length");
     public static readonly DesignKey WhipDiameter = Known("whip.diameter");
     public static readonly DesignKey WhipCoverDiameter = Known("whip.cover_diameter");
 
     public static readonly DesignKey Polarizer = Known("polarizer");
-    public static readonly DesignKey PolarizerSense = Known("polarizer.sense");
-    public static readonly DesignKey PolarizerWinding = Known("polarizer.winding");
+    public static readonly ChoiceKey<Model.Sense> PolarizerSense = Choice("polarizer.sense", ChoiceWords.Sense);
+    public static readonly ChoiceKey<Model.Winding> PolarizerWinding = Choice("polarizer.winding", ChoiceWords.Winding);
     public static readonly DesignKey PolarizerElements = Known("polarizer.elements");
     public static readonly DesignKey PolarizerElementLength = Known("polarizer.element_length");
     public static readonly DesignKey PolarizerElementRise = Known("polarizer.element_rise");
@@ -73,11 +82,11 @@ public static class Keys
     public static readonly DesignKey FabricationBoardHeight = Known("fabrication.board.height");
     public static readonly DesignKey FabricationBoardThickness = Known("fabrication.board.thickness");
     public static readonly DesignKey FabricationPrintClearance = Known("fabrication.print_clearance");
-    public static readonly DesignKey FabricationPaper = Known("fabrication.paper");
+    public static readonly ChoiceKey<Model.Paper> FabricationPaper = Choice("fabrication.paper", ChoiceWords.Paper);
     public static readonly DesignKey FabricationDpi = Known("fabrication.dpi");
 
     public static readonly DesignKey Solve = Known("solve");
-    public static readonly DesignKey SolveObjective = Known("solve.objective");
+    public static readonly ChoiceKey<Model.Objective> SolveObjective = Choice("solve.objective", ChoiceWords.Objective);
     public static readonly DesignKey SolveElevations = Known("solve.elevations");
     public static readonly DesignKey SolveElevationsFrom = Known("solve.elevations.from");
     public static readonly DesignKey SolveElevationsTo = Known("solve.elevations.to");
@@ -107,6 +116,12 @@ public static class Keys
     public static readonly DesignKey ToleranceSeed = Known("tolerance.seed");
 
     public static readonly DesignKey Calibration = Known("calibration");
+
+    /// <summary>A choice key whose table choices must be exactly the word map's words, in order.</summary>
+    private static ChoiceKey<T> Choice<T>(string path, WordMap<T> words) where T : struct, Enum =>
+        Known(path).Field.Type is Spec.Fields.ChoiceField choice && choice.Choices.SequenceEqual(words.Words)
+            ? new ChoiceKey<T>(path, words)
+            : throw new InvalidOperationException($"{path}: the table's choices and the {typeof(T).Name} word map differ");
 
     private static DesignKey Known(string path) =>
         Spec.DesignKeys.AllKeyPaths().Contains(path, StringComparer.Ordinal)

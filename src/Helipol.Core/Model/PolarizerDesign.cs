@@ -41,7 +41,7 @@ public sealed record Whip(WhipKind Kind, double LengthM, double DiameterM, doubl
     public double RadiusM => DiameterM / 2;
 }
 
-public sealed record Wire(double DiameterM, ConductorMaterial Material, SourcedValue? ConductivitySPerM, SourcedValue RelativePermeability)
+public sealed record ElementWire(double DiameterM, ConductorMaterial Material, SourcedValue? ConductivitySPerM, SourcedValue RelativePermeability)
 {
     public double RadiusM => DiameterM / 2;
     public bool IsPerfectConductor => ConductivitySPerM is null;
@@ -72,7 +72,7 @@ public sealed record Polarizer(
     double? ElementLengthM,
     double? ElementRiseM,
     double CentreHeightM,
-    Wire Wire,
+    ElementWire Wire,
     Former Former,
     Wrap? Wrap,
     Glue? Glue)

@@ -80,12 +80,12 @@ public class LayoutTests(ITestOutputHelper output)
         var height = rise * U(1.05, 1.6);
         var rings = rng.Next(1, 7);
         var cell = 2 * (od / 2 + 0.5 + 5) + 12;
-        var paper = rng.Next(2) == 0 ? PaperSize.A4 : PaperSize.Letter;
+        var paper = rng.Next(2) == 0 ? Paper.A4 : Paper.Letter;
         return BuildInputs.Typical with
         {
             DesignName = $"random-{k}-{(f / 1e6).ToString("0", CultureInfo.InvariantCulture)}mhz",
-            Sense = rng.Next(2) == 0 ? CircularSense.Rhcp : CircularSense.Lhcp,
-            Winding = rng.Next(2) == 0 ? HelixWinding.Right : HelixWinding.Left,
+            Sense = rng.Next(2) == 0 ? Sense.Rhcp : Sense.Lhcp,
+            Winding = rng.Next(2) == 0 ? Winding.Right : Winding.Left,
             ElementCount = rng.Next(3, 9),
             ElementLengthMm = length,
             ElementRiseMm = rise,
@@ -114,10 +114,10 @@ public class LayoutTests(ITestOutputHelper output)
         AssertDxf(DrillDxf.Write(g), what + ", drill.dxf", board: false);
     }
 
-    private static void AssertPdf(byte[] bytes, PaperSize paper, string what)
+    private static void AssertPdf(byte[] bytes, Paper paper, string what)
     {
         using var pdf = PdfDocument.Open(bytes);
-        var (wMm, hMm) = paper == PaperSize.A4 ? (210.0, 297.0) : (215.9, 279.4);
+        var (wMm, hMm) = paper == Paper.A4 ? (210.0, 297.0) : (215.9, 279.4);
         var margin = PrintableMarginMm * PtPerMm;
         foreach (var page in pdf.GetPages())
         {
@@ -156,7 +156,7 @@ public class LayoutTests(ITestOutputHelper output)
     {
         var input = Input(name);
         using var pdf = PdfDocument.Open(PacketPdf.Write(new PolarizerGeometry(input)), new ParsingOptions { ClipPaths = true });
-        var (wMm, hMm) = input.Paper == PaperSize.A4 ? (210.0, 297.0) : (215.9, 279.4);
+        var (wMm, hMm) = input.Paper == Paper.A4 ? (210.0, 297.0) : (215.9, 279.4);
         var margin = PrintableMarginMm * PtPerMm;
         int paths = 0;
         foreach (var page in pdf.GetPages())

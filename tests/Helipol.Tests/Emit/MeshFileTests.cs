@@ -5,6 +5,7 @@ using System.Text.RegularExpressions;
 using System.Xml.Linq;
 using Helipol.Geometry;
 using Helipol.Tests.Geometry;
+using Helipol.Model;
 
 namespace Helipol.Tests.Emit;
 
@@ -100,7 +101,7 @@ public partial class MeshFileTests
 
         // Sense letter: each sunk lattice point removes depth × pitch² (the integral of a bilinear
         // hat function over its support is one cell's area), at a slightly smaller radius.
-        var letter = i.Sense == CircularSense.Rhcp ? 'R' : 'L';
+        var letter = i.Sense == Sense.Rhcp ? 'R' : 'L';
         var sunk = SenseMark.Glyph(letter).Sum(row => row.Count(ch => ch == '#'));
         var mark = sunk * FormerSleeve.MarkDepthMm * sleeve.Mark.PitchMm * sleeve.Mark.PitchMm * (ro - FormerSleeve.MarkDepthMm / 2) / ro;
 

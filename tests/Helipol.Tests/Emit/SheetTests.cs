@@ -4,6 +4,7 @@ using SkiaSharp;
 using UglyToad.PdfPig;
 using Helipol.Geometry;
 using Helipol.Tests.Geometry;
+using Helipol.Model;
 
 namespace Helipol.Tests.Emit;
 
@@ -21,7 +22,7 @@ public class SheetTests
         Assert.Equal(new byte[] { 137, 80, 78, 71, 13, 10, 26, 10 }, png[..8]);
         var chunks = Chunks(png);
         Assert.Equal("IHDR", chunks[0].Type);
-        var (paperW, paperH) = input.Paper == PaperSize.A4 ? (210.0, 297.0) : (215.9, 279.4);
+        var (paperW, paperH) = input.Paper == Paper.A4 ? (210.0, 297.0) : (215.9, 279.4);
         Assert.Equal((int)Math.Round(paperW / 25.4 * input.Dpi), (int)BinaryPrimitives.ReadUInt32BigEndian(chunks[0].Data));
         Assert.Equal((int)Math.Round(paperH / 25.4 * input.Dpi), (int)BinaryPrimitives.ReadUInt32BigEndian(chunks[0].Data.AsSpan(4)));
         var phys = chunks.Single(c => c.Type == "pHYs");
@@ -133,7 +134,7 @@ public class SheetTests
             Assert.Contains(title, text);
         foreach (var page in pdf.GetPages())
         {
-            AssertPaper(PaperSize.A4, page.Width, page.Height);
+            AssertPaper(Paper.A4, page.Width, page.Height);
             Assert.All(page.Letters, l => Assert.True(l.BoundingBox.Bottom >= 0 && l.BoundingBox.Top <= page.Height,
                 $"'{l.Value}' at y = {l.BoundingBox.Bottom:0.0} pt lies off page {page.Number}"));
         }
@@ -190,9 +191,9 @@ public class SheetTests
 
     /// <summary>PDF 32000-1:2008 §8.3.2.3: user space units are 1/72 in; A4 (ISO 216) is
     /// 210 × 297 mm = 595.28 × 841.89 pt, US Letter 8.5 × 11 in = 612 × 792 pt.</summary>
-    private static void AssertPaper(PaperSize paper, double w, double h)
+    private static void AssertPaper(Paper paper, double w, double h)
     {
-        var (ew, eh) = paper == PaperSize.A4 ? (595.28, 841.89) : (612.0, 792.0);
+        var (ew, eh) = paper == Paper.A4 ? (595.28, 841.89) : (612.0, 792.0);
         Assert.InRange(w, ew - 0.01, ew + 0.01);
         Assert.InRange(h, eh - 0.01, eh + 0.01);
     }

@@ -22,8 +22,8 @@ public class BuildInputFromModelTests
         Assert.Equal(28.0, input.FormerOuterDiameterMm, 9);
         Assert.Equal(8.4, input.FormerBoreDiameterMm, 9);
         Assert.Equal(19.0 / 2, input.CentreHeightMm, 9);
-        Assert.Equal(CircularSense.Rhcp, input.Sense);
-        Assert.Equal(HelixWinding.Left, input.Winding);
+        Assert.Equal(Sense.Rhcp, input.Sense);
+        Assert.Equal(Winding.Left, input.Winding);
         Assert.Equal(5, input.ElementCount);
         Assert.Equal(1, input.RingCount);
         Assert.Equal(19.0, input.BoardThicknessMm, 9);

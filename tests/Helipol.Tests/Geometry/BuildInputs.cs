@@ -1,4 +1,5 @@
 using Helipol.Geometry;
+using Helipol.Model;
 
 namespace Helipol.Tests.Geometry;
 
@@ -12,8 +13,8 @@ public static class BuildInputs
     public static PolarizerBuildInput Typical => new()
     {
         DesignName = "test-5g8",
-        Sense = CircularSense.Rhcp,
-        Winding = HelixWinding.Right,
+        Sense = Sense.Rhcp,
+        Winding = Winding.Right,
         ElementCount = 4,
         ElementLengthMm = 14.2,
         ElementRiseMm = 6.8,
@@ -39,8 +40,8 @@ public static class BuildInputs
     public static PolarizerBuildInput LeftSixOnLetter => Typical with
     {
         DesignName = "test-left-6",
-        Sense = CircularSense.Lhcp,
-        Winding = HelixWinding.Left,
+        Sense = Sense.Lhcp,
+        Winding = Winding.Left,
         ElementCount = 6,
         ElementLengthMm = 11.5,
         ElementRiseMm = 7.5,
@@ -48,7 +49,7 @@ public static class BuildInputs
         FormerOuterDiameterMm = 20,
         FormerHeightMm = 18,
         RingCount = 1,
-        Paper = PaperSize.Letter,
+        Paper = Paper.Letter,
         Dpi = 200,
     };
 

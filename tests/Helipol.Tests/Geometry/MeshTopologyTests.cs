@@ -1,5 +1,6 @@
 using CsCheck;
 using Helipol.Geometry;
+using Helipol.Model;
 
 namespace Helipol.Tests.Geometry;
 
@@ -55,7 +56,7 @@ public class MeshTopologyTests
             var height = rise + 6;
             var input = BuildInputs.Typical with
             {
-                ElementCount = n, Winding = right ? HelixWinding.Right : HelixWinding.Left, ElementLengthMm = length,
+                ElementCount = n, Winding = right ? Winding.Right : Winding.Left, ElementLengthMm = length,
                 ElementRiseMm = rise, FormerHeightMm = height, CentreHeightMm = rise / 2 + place * (height - rise), WireDiameterMm = wire,
                 FormerOuterDiameterMm = 18,
             };

@@ -1,4 +1,5 @@
 using Helipol.Geometry;
+using Helipol.Model;
 
 namespace Helipol.Tests.Geometry;
 
@@ -45,7 +46,7 @@ public class PolarizerGeometryTests
         var b = e.PointAt(0.6);
         // z component of a × b > 0 means b lies counter-clockwise of a seen from above (+z).
         var turn = a.X * b.Y - a.Y * b.X;
-        Assert.Equal(input.Winding == HelixWinding.Right ? 1 : -1, Math.Sign(turn));
+        Assert.Equal(input.Winding == Winding.Right ? 1 : -1, Math.Sign(turn));
     }
 
     [Fact]

@@ -1,4 +1,5 @@
 using Helipol.Geometry;
+using Helipol.Model;
 
 namespace Helipol.Tests.Geometry;
 
@@ -23,7 +24,7 @@ public class WrapTemplateTests
             var d = line.To - line.From;
             var angleDeg = Math.Atan(Math.Abs(d.Y) / Math.Abs(d.X)) * 180 / Math.PI;
             Assert.InRange(angleDeg, expectedDeg - 0.05, expectedDeg + 0.05);
-            Assert.Equal(input.Winding == HelixWinding.Right ? 1 : -1, Math.Sign(d.X));
+            Assert.Equal(input.Winding == Winding.Right ? 1 : -1, Math.Sign(d.X));
             Assert.InRange(line.From.X, -1e-9, wrap.WidthMm + 1e-9);
             Assert.InRange(line.To.X, -1e-9, wrap.WidthMm + 1e-9);
         }
@@ -44,7 +45,7 @@ public class WrapTemplateTests
         // (0.15 mm) plus a little clear of every line drawn, and sit within 5 mm of its element's
         // lower end so it is read as that line's number.
         var input = name == "LeftLarge"
-            ? BuildInputs.Large with { Winding = HelixWinding.Left, Sense = CircularSense.Lhcp }
+            ? BuildInputs.Large with { Winding = Winding.Left, Sense = Sense.Lhcp }
             : BuildInputs.ByName(name);
         var wrap = WrapTemplate.From(new PolarizerGeometry(input));
         Assert.Equal(input.ElementCount, wrap.Labels.Count);

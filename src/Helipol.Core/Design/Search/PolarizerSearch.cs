@@ -125,7 +125,7 @@ public static class PolarizerSearch
         return found;
     }
 
-    private static string Word(Winding w) => w == Winding.Left ? "left" : "right";
+    private static string Word(Winding w) => ChoiceWords.Winding.Word(w);
 
     private static double Step(double[] axis) => axis.Length > 1 ? axis[1] - axis[0] : 0;
 

@@ -41,7 +41,7 @@ public static class VerdictJudge
         var inv = CultureInfo.InvariantCulture;
         var s = design.Solve;
         double limit = s.AxialRatioLimitDb;
-        string sense = solved.Sense == Sense.Rhcp ? "RHCP" : "LHCP";
+        string sense = ChoiceWords.Label(solved.Sense);
         string window = Window(design);
         var reasons = new List<string>();
         var grades = new List<Grade>();
@@ -159,10 +159,5 @@ public static class VerdictJudge
     private static string Deg(double rad) => SignedNumber.Plain(rad * 180 / Math.PI, "0.#");
     private static string Ar(double db) => double.IsFinite(db) ? db.ToString("0.0", CultureInfo.InvariantCulture) + " dB" : "infinite";
     private static string Vswr(double v) => double.IsFinite(v) ? v.ToString("0.0", CultureInfo.InvariantCulture) : "∞";
-    private static string SenseWord(Helipol.Engine.PolarizationSense s) => s switch
-    {
-        Helipol.Engine.PolarizationSense.Rhcp => "RHCP",
-        Helipol.Engine.PolarizationSense.Lhcp => "LHCP",
-        _ => "linear",
-    };
+    private static string SenseWord(Helipol.Engine.PolarizationSense s) => SenseLabels.Of(s);
 }

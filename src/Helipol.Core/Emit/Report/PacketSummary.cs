@@ -25,8 +25,8 @@ public static class PacketSummary
             new("Next step", verdict.NextStep),
             new("Design", design.Name),
             new("Band", F($"{design.Band.LowHz / 1e9:0.####} - {design.Band.HighHz / 1e9:0.####} GHz (centre {design.Band.CenterHz / 1e9:0.####} GHz)")),
-            new("Whip", F($"{(design.Whip.Kind == WhipKind.Dipole ? "dipole" : "monopole")}, {design.Whip.LengthM * 1000:0.##} mm")),
-            new("Sense / winding", F($"{(solved.Sense == Sense.Rhcp ? "RHCP" : "LHCP")} / {(solved.Winding == Winding.Right ? "right" : "left")} ({Source(solved.WindingPinned)})")),
+            new("Whip", F($"{ChoiceWords.WhipKind.Word(design.Whip.Kind)}, {design.Whip.LengthM * 1000:0.##} mm")),
+            new("Sense / winding", F($"{ChoiceWords.Label(solved.Sense)} / {ChoiceWords.Winding.Word(solved.Winding)} ({Source(solved.WindingPinned)})")),
             new("Elements", F($"{l.Count} ({Source(solved.CountPinned)})")),
             new("Element length", F($"{l.LengthM * 1000:0.00} mm ({Source(solved.LengthPinned)}); practice scaling {practice.LengthM * 1000:0.00} mm")),
             new("Cut to within", double.IsFinite(tolerance.CutToleranceMm) && tolerance.CutToleranceMm > 0

@@ -15,8 +15,8 @@ public static class ReportMarkdown
     {
         var r = new StringBuilder();
         void L(FormattableString line) => r.Append(line.ToString(CultureInfo.InvariantCulture)).Append('\n');
-        string sense = s.Sense == Sense.Rhcp ? "RHCP" : "LHCP";
-        string winding = s.Winding == Winding.Left ? "left" : "right";
+        string sense = ChoiceWords.Label(s.Sense);
+        string winding = ChoiceWords.Winding.Word(s.Winding);
         double centre = design.Band.CenterHz;
 
         L($"# {design.Name}: solved polarizer");
@@ -37,7 +37,7 @@ public static class ReportMarkdown
         L($"| element rise | {s.Layout.RiseM * 1e3:0.00} mm | {s.Practice.Layout.RiseM * 1e3:0.00} mm | {(s.RisePinned ? "design file" : "search")} |");
         L($"| former outer diameter | {s.Layout.OuterDiameterM * 1e3:0.00} mm | {s.Practice.Layout.OuterDiameterM * 1e3:0.00} mm | {(s.DiameterPinned ? "design file" : "search")} |");
         L($"| arc angle | {s.Layout.ArcAngleRad * 180 / Math.PI:0.0}° | {s.Practice.Layout.ArcAngleRad * 180 / Math.PI:0.0}° | derived |");
-        L($"| winding | {winding} | {(s.Practice.Winding == Winding.Left ? "left" : "right")} (builders' rule) | {(s.WindingPinned ? "design file" : "field model")} |");
+        L($"| winding | {winding} | {ChoiceWords.Winding.Word(s.Practice.Winding)} (builders' rule) | {(s.WindingPinned ? "design file" : "field model")} |");
         L($"| worst axial ratio over band and window | {Worst(s.Points, s.Sense)} | {Worst(s.Practice.Points, s.Sense, s.Practice.ObjectiveDb is null)} | |");
         L($"");
         L($"Right winding means the azimuth grows as the element rises; left means it falls, so seen from outside a left-wound element descends to the right.");
@@ -138,7 +138,7 @@ public static class ReportMarkdown
         if (notModelled || points.Count == 0) return "not modelled";
         var inv = CultureInfo.InvariantCulture;
         var w = points.MaxBy(p => p.WorstScoreDb)!;
-        string word = sense == Sense.Rhcp ? "RHCP" : "LHCP";
+        string word = ChoiceWords.Label(sense);
         return w.AllWantedSense && points.All(p => p.AllWantedSense)
             ? string.Create(inv, $"{points.Max(p => p.WorstWantedAxialRatioDb):0.0} dB {word}")
             : string.Create(inv, $"wrong sense: {SolvedJson.SenseWord(w.Worst.Sense)}, axial ratio {w.Worst.AxialRatioDb:0.0} dB at {w.FrequencyHz / 1e6:0.#} MHz, {SignedNumber.Plain(w.Worst.Direction.ElevationRad * 180 / Math.PI, "0.#")}° elevation");

@@ -294,7 +294,7 @@ public static class ReportPlots
         }
     }
 
-    private static string Word(Sense s) => s == Sense.Rhcp ? "RHCP" : "LHCP";
+    private static string Word(Sense s) => ChoiceWords.Label(s);
 
     private static string ElevationWord(double rad) => Math.Abs(rad) < 1e-9 ? "at the horizon" : FormattableString.Invariant($"{rad * 180 / Math.PI:0.#}° above the horizon");
 }

@@ -1,6 +1,7 @@
 using System.Globalization;
 using SkiaSharp;
 using Helipol.Geometry;
+using Helipol.Model;
 
 namespace Helipol.Emit.Sheet;
 
@@ -18,7 +19,7 @@ public static class BendSheetPainter
     public const double BarHeightMm = 3;
     public const double BarTopMm = 27;
     public const double MetricBarMm = 50;
-    public const double InchBarMm = 2 * Paper.MmPerInch;
+    public const double InchBarMm = 2 * PaperSheet.MmPerInch;
     /// <summary>Top of the first section on every page, below the title and the bars, mm.</summary>
     public const double ContentTopMm = 38;
     /// <summary>Height of the bend template's two caption lines above each tile, mm.</summary>
@@ -31,7 +32,7 @@ public static class BendSheetPainter
     /// <summary>One drawing action per page, in order.</summary>
     public static IReadOnlyList<Action<SKCanvas>> Pages(PolarizerGeometry g)
     {
-        var (pageW, pageH) = Paper.SizeMm(g.Input.Paper);
+        var (pageW, pageH) = PaperSheet.SizeMm(g.Input.Paper);
         var bottom = pageH - MarginMm;
         var pages = new List<List<(double Top, Block Block)>> { new() };
         var cursor = ContentTopMm;
@@ -59,7 +60,7 @@ public static class BendSheetPainter
         var m = MarginMm;
         var ci = CultureInfo.InvariantCulture;
         pen.Text($"Bend sheet: {i.DesignName}", m, 17, 5);
-        pen.Text(string.Create(ci, $"{BuildTable.SenseLabel(i.Sense)} · {i.ElementCount} elements · {BuildTable.FrequencyLabel(i.FrequencyHz)} · print at 100 % (actual size), then check both bars"), m, 23, 3, grey: true);
+        pen.Text(string.Create(ci, $"{ChoiceWords.Label(i.Sense)} · {i.ElementCount} elements · {BuildTable.FrequencyLabel(i.FrequencyHz)} · print at 100 % (actual size), then check both bars"), m, 23, 3, grey: true);
         CalibrationBars(pen, m);
     }
 
@@ -109,7 +110,7 @@ public static class BendSheetPainter
         // 3. Arc bend template at 1:1, tiled over as many pages as it needs, then 4. winding drawing.
         var arc = ArcDrawing.For(g);
         var tileW = pageW - 2 * m;
-        var tileH = Paper.SizeMm(i.Paper).HeightMm - ContentTopMm - MarginMm - ArcCaptionMm - 1;
+        var tileH = PaperSheet.SizeMm(i.Paper).HeightMm - ContentTopMm - MarginMm - ArcCaptionMm - 1;
         var half = (pageW - 2 * m) / 2;
         if (arc.WidthMm <= half - 2 && arc.HeightMm <= 120)
         {
@@ -265,6 +266,6 @@ public static class BendSheetPainter
             : new[] { "Left-hand winding:", "from outside, each element", "climbs to the left; from", "above, it turns clockwise", "as it climbs." };
         var ty = cy + 13;
         foreach (var line in words) { pen.Text(line, cx - 10, ty, 2.4); ty += 3.4; }
-        pen.Text(BuildTable.SenseLabel(g.Input.Sense), x0, y0 + h + 4, 3);
+        pen.Text(ChoiceWords.Label(g.Input.Sense), x0, y0 + h + 4, 3);
     }
 }

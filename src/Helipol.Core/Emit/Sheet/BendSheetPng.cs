@@ -1,5 +1,6 @@
 using SkiaSharp;
 using Helipol.Geometry;
+using Helipol.Model;
 
 namespace Helipol.Emit.Sheet;
 
@@ -8,10 +9,10 @@ namespace Helipol.Emit.Sheet;
 /// one page, the pages stand one under the other, each exactly one paper tall.</summary>
 public static class BendSheetPng
 {
-    public static (int Width, int Height) PixelSize(PaperSize paper, int dpi)
+    public static (int Width, int Height) PixelSize(Paper paper, int dpi)
     {
-        var (w, h) = Paper.SizeMm(paper);
-        return ((int)Math.Round(w / Paper.MmPerInch * dpi), (int)Math.Round(h / Paper.MmPerInch * dpi));
+        var (w, h) = PaperSheet.SizeMm(paper);
+        return ((int)Math.Round(w / PaperSheet.MmPerInch * dpi), (int)Math.Round(h / PaperSheet.MmPerInch * dpi));
     }
 
     public static byte[] Write(PolarizerGeometry g)
@@ -23,7 +24,7 @@ public static class BendSheetPng
             ?? throw new InvalidOperationException("could not allocate the raster for the bend sheet");
         var canvas = surface.Canvas;
         canvas.Clear(SKColors.White);
-        var pxPerMm = (float)(g.Input.Dpi / Paper.MmPerInch);
+        var pxPerMm = (float)(g.Input.Dpi / PaperSheet.MmPerInch);
         for (var k = 0; k < pages.Count; k++)
         {
             canvas.Save();

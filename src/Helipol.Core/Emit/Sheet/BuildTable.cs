@@ -1,5 +1,6 @@
 using System.Globalization;
 using Helipol.Geometry;
+using Helipol.Model;
 
 namespace Helipol.Emit.Sheet;
 
@@ -15,7 +16,7 @@ public static class BuildTable
         [
             ("Design", i.DesignName),
             ("Frequency", FrequencyLabel(i.FrequencyHz)),
-            ("Sense", F($"{SenseLabel(i.Sense)}, {(i.Winding == HelixWinding.Right ? "right-hand" : "left-hand")} winding")),
+            ("Sense", F($"{ChoiceWords.Label(i.Sense)}, {(i.Winding == Winding.Right ? "right-hand" : "left-hand")} winding")),
             ("Count", F($"{i.ElementCount} elements")),
             ("Spacing", F($"{360.0 / i.ElementCount:0.##}° = {g.ElementSpacingMm:0.00} mm between starts at the wire axis")),
             ("Element length", F($"{i.ElementLengthMm:0.00} mm, {(i.ToleranceIsCutFigure ? "cut to within" : "tolerance")} ± {i.LengthToleranceMm:0.00} mm")),
@@ -29,7 +30,6 @@ public static class BuildTable
         ];
     }
 
-    public static string SenseLabel(CircularSense s) => s == CircularSense.Rhcp ? "RHCP" : "LHCP";
 
     public static string FrequencyLabel(double hz) => hz switch
     {

@@ -1,5 +1,6 @@
 using SkiaSharp;
 using Helipol.Geometry;
+using Helipol.Model;
 
 namespace Helipol.Emit.Sheet;
 
@@ -24,7 +25,7 @@ public static class PacketPdf
 
     private static IEnumerable<Action<SKCanvas>> SummaryPages(PolarizerGeometry g)
     {
-        var (pageW, pageH) = Paper.SizeMm(g.Input.Paper);
+        var (pageW, pageH) = PaperSheet.SizeMm(g.Input.Paper);
         var m = BendSheetPainter.MarginMm;
         var width = pageW - 2 * m;
         var bottom = pageH - m;
@@ -82,7 +83,7 @@ public static class PacketPdf
     /// </summary>
     private static IEnumerable<Action<SKCanvas>> RingPages(PolarizerGeometry g)
     {
-        var (pageW, pageH) = Paper.SizeMm(g.Input.Paper);
+        var (pageW, pageH) = PaperSheet.SizeMm(g.Input.Paper);
         var m = BendSheetPainter.MarginMm;
         var r = g.FormerOuterRadiusMm;
         var top = BendSheetPainter.ContentTopMm;

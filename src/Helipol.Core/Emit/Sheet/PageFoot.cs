@@ -1,6 +1,7 @@
 using System.Globalization;
 using SkiaSharp;
 using Helipol.Geometry;
+using Helipol.Model;
 
 namespace Helipol.Emit.Sheet;
 
@@ -13,9 +14,9 @@ internal static class PageFoot
     /// <summary>Baseline of the foot line, mm above the paper's bottom edge.</summary>
     public const double BaselineAboveEdgeMm = 6;
 
-    public static void Draw(SKCanvas canvas, PaperSize paper, string title, int page, int pages)
+    public static void Draw(SKCanvas canvas, Paper paper, string title, int page, int pages)
     {
-        var (w, h) = Paper.SizeMm(paper);
+        var (w, h) = PaperSheet.SizeMm(paper);
         using var pen = new SheetPen(canvas);
         var m = BendSheetPainter.MarginMm;
         var y = h - BaselineAboveEdgeMm;

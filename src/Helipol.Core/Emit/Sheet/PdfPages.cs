@@ -1,5 +1,6 @@
 using SkiaSharp;
 using Helipol.Geometry;
+using Helipol.Model;
 
 namespace Helipol.Emit.Sheet;
 
@@ -12,10 +13,10 @@ internal static class PdfPages
 {
     /// <summary>Writes the pages, each with "page n of m" in its foot (a one-page sheet too), so
     /// a loose page can always be put back in order.</summary>
-    public static byte[] Write(PaperSize paper, string title, IEnumerable<Action<SKCanvas>> pages)
+    public static byte[] Write(Paper paper, string title, IEnumerable<Action<SKCanvas>> pages)
     {
         var all = pages.ToList();
-        var (wMm, hMm) = Paper.SizeMm(paper);
+        var (wMm, hMm) = PaperSheet.SizeMm(paper);
         using var stream = new MemoryStream();
         var metadata = new SKDocumentPdfMetadata
         {
@@ -35,8 +36,8 @@ internal static class PdfPages
         {
             for (var k = 0; k < all.Count; k++)
             {
-                var canvas = doc.BeginPage((float)(wMm * Paper.PointsPerMm), (float)(hMm * Paper.PointsPerMm));
-                canvas.Scale((float)Paper.PointsPerMm);
+                var canvas = doc.BeginPage((float)(wMm * PaperSheet.PointsPerMm), (float)(hMm * PaperSheet.PointsPerMm));
+                canvas.Scale((float)PaperSheet.PointsPerMm);
                 all[k](canvas);
                 PageFoot.Draw(canvas, paper, title, k + 1, all.Count);
                 doc.EndPage();

@@ -31,8 +31,8 @@ public static class BuildInputFromModel
         return new PolarizerBuildInput
         {
             DesignName = design.Name,
-            Sense = p.Sense == Sense.Rhcp ? CircularSense.Rhcp : CircularSense.Lhcp,
-            Winding = winding == Winding.Right ? HelixWinding.Right : HelixWinding.Left,
+            Sense = p.Sense,
+            Winding = winding,
             ElementCount = layout.Count,
             ElementLengthMm = layout.LengthM * MmPerM,
             ElementRiseMm = layout.RiseM * MmPerM,
@@ -47,7 +47,7 @@ public static class BuildInputFromModel
             CoverDiameterMm = (design.Whip.CoverDiameterM ?? design.Whip.DiameterM) * MmPerM,
             FormerPrinted = p.Former.Material.Key is "pla" or "petg",
             FormerMaterial = p.Former.Material.Key,
-            Whip = design.Whip.Kind == WhipKind.Monopole ? WhipShape.Monopole : WhipShape.Dipole,
+            Whip = design.Whip.Kind,
             WhipLengthMm = design.Whip.LengthM * MmPerM,
             CentreAboveFeedMm = p.CentreHeightM * MmPerM,
             WrapMaterial = p.Wrap?.Material.Key ?? "none",
@@ -59,7 +59,7 @@ public static class BuildInputFromModel
             BoardHeightMm = f.BoardHeightMm,
             BoardThicknessMm = f.BoardThicknessMm,
             PrintClearanceMm = f.PrintClearanceMm,
-            Paper = f.Paper == Paper.Letter ? PaperSize.Letter : PaperSize.A4,
+            Paper = f.Paper,
             Dpi = f.Dpi,
             LengthToleranceMm = cutToleranceMm is { } c && double.IsFinite(c.LengthMm) && c.LengthMm > 0 ? c.LengthMm : t.ElementLengthM * MmPerM,
             RiseToleranceMm = cutToleranceMm is { } r && double.IsFinite(r.RiseMm) && r.RiseMm > 0 ? r.RiseMm : t.ElementRiseM * MmPerM,

@@ -1,6 +1,7 @@
 using System.Globalization;
 using SkiaSharp;
 using Helipol.Geometry;
+using Helipol.Model;
 
 namespace Helipol.Emit.Sheet.Assembly;
 
@@ -28,7 +29,7 @@ internal static class AssemblyPages
         var i = g.Input;
         var hand = g.WindingSign > 0 ? "right-hand" : "left-hand";
         var bottom = i.CentreAboveFeedMm - i.FormerHeightMm / 2;
-        var reference = i.Whip == WhipShape.Dipole ? "the feed gap" : "the ground plane";
+        var reference = i.Whip == WhipKind.Dipole ? "the feed gap" : "the ground plane";
         if (i.FormerPrinted)
         {
             yield return new Step("This build: a printed sleeve", [
@@ -63,14 +64,14 @@ internal static class AssemblyPages
             34, AssemblyViews.WrapDirection);
         yield return new Step("4  Fit the former on the whip", [
             F($"Slide the former over the whip with ring 1 (the bottom face) toward {reference}; its bottom face sits {Math.Abs(bottom):0.0} mm {(bottom >= 0 ? "above" : "below")} {reference}."),
-            F($"Seen from outside, the elements climb to the {(g.WindingSign > 0 ? "right" : "left")}; the polarizer then gives {BuildTable.SenseLabel(i.Sense)}.")],
+            F($"Seen from outside, the elements climb to the {(g.WindingSign > 0 ? "right" : "left")}; the polarizer then gives {ChoiceWords.Label(i.Sense)}.")],
             92, AssemblyViews.FormerOnWhip);
     }
 
     private static IEnumerable<Step> TestSteps(PolarizerGeometry g)
     {
-        var sense = BuildTable.SenseLabel(g.Input.Sense);
-        var other = g.Input.Sense == CircularSense.Rhcp ? "LHCP" : "RHCP";
+        var sense = ChoiceWords.Label(g.Input.Sense);
+        var other = ChoiceWords.Label(g.Input.Sense == Sense.Rhcp ? Sense.Lhcp : Sense.Rhcp);
         yield return new Step("5  Winding check", [
             F($"Receive a {sense} test source at a fixed distance and note the level. Then either fit a copy wound the other way, or"),
             F($"turn the partner antenna to {other}: the level must drop by 10 dB or more. If it rises, the elements are wound the wrong way."),
@@ -90,7 +91,7 @@ internal static class AssemblyPages
 
     private static IEnumerable<Action<SKCanvas>> Flow(PolarizerGeometry g, string title, IEnumerable<Step> steps)
     {
-        var (pageW, pageH) = Paper.SizeMm(g.Input.Paper);
+        var (pageW, pageH) = PaperSheet.SizeMm(g.Input.Paper);
         var m = BendSheetPainter.MarginMm;
         var width = pageW - 2 * m;
         var blocks = new List<(double Height, Action<SheetPen, double> Draw)>();

@@ -1,5 +1,6 @@
 using SkiaSharp;
 using Helipol.Geometry;
+using Helipol.Model;
 
 namespace Helipol.Emit.Sheet.Assembly;
 
@@ -12,8 +13,8 @@ public static class AssemblyPng
     public static byte[] Write(PolarizerGeometry g)
     {
         var pages = AssemblyPages.Pages(g);
-        var (wMm, hMm) = Paper.SizeMm(g.Input.Paper);
-        var pxPerMm = (float)(Dpi / Paper.MmPerInch);
+        var (wMm, hMm) = PaperSheet.SizeMm(g.Input.Paper);
+        var pxPerMm = (float)(Dpi / PaperSheet.MmPerInch);
         var w = (int)Math.Round(wMm * pxPerMm);
         var pageH = (int)Math.Round(hMm * pxPerMm);
         using var surface = SKSurface.Create(new SKImageInfo(w, pageH * pages.Count, SKColorType.Rgba8888, SKAlphaType.Premul))

@@ -1,6 +1,7 @@
 using System.Globalization;
 using SkiaSharp;
 using Helipol.Geometry;
+using Helipol.Model;
 
 namespace Helipol.Emit.Sheet.Assembly;
 
@@ -24,7 +25,7 @@ internal static class AssemblyViews
     {
         var i = g.Input;
         var whip = i.WhipLengthMm > 0 ? i.WhipLengthMm : 2 * i.FormerHeightMm;
-        var dipole = i.Whip == WhipShape.Dipole;
+        var dipole = i.Whip == WhipKind.Dipole;
         // The feed (dipole) or the ground (monopole) is height 0; the whip spans [-L/2, L/2] or [0, L].
         var whipBottom = dipole ? -whip / 2 : 0;
         var whipTop = dipole ? whip / 2 : whip;
@@ -67,7 +68,7 @@ internal static class AssemblyViews
         pen.Arrow(dx, Y(formerBottom), formerBottom > 0 ? -Math.PI / 2 : Math.PI / 2, 1.2);
         pen.Text(string.Create(ci, $"bottom face {Math.Abs(formerBottom):0.0} mm {(formerBottom >= 0 ? "above" : "below")} the {(dipole ? "feed" : "ground")}"), dx + 1.5, (Y(0) + Y(formerBottom)) / 2 + 1, 2.4);
         pen.Text(string.Create(ci, $"former {i.FormerOuterDiameterMm:0.#} mm across, {i.FormerHeightMm:0.#} mm tall"), dx + 1.5, Y(formerBottom + i.FormerHeightMm) + 2.5, 2.4);
-        pen.Text(string.Create(ci, $"{BuildTable.SenseLabel(i.Sense)}: elements climb to the {(g.WindingSign > 0 ? "right" : "left")} on the near side"), dx + 1.5, Y(formerBottom + i.FormerHeightMm) + 6, 2.4);
+        pen.Text(string.Create(ci, $"{ChoiceWords.Label(i.Sense)}: elements climb to the {(g.WindingSign > 0 ? "right" : "left")} on the near side"), dx + 1.5, Y(formerBottom + i.FormerHeightMm) + 6, 2.4);
     }
 
     private static void Helices(SheetPen pen, PolarizerGeometry g, double cx, Func<double, double> y, double s, bool front)
